@@ -1,0 +1,43 @@
+package org.precedence.cli;
+
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.HelpCommand;
+
+/**
+ * Entry point of the {@code precedence} command: wiring only. Each verb is its own class.
+ */
+@Command(name = "precedence",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = "Exactly fair, tie-free, replayable turn orders for tabletop games.",
+        subcommands = {
+            HelpCommand.class,
+        })
+public final class PrecedenceApplication implements Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    /** Without a subcommand, print the usage (listing the subcommands) and exit 2. */
+    @Override
+    public Integer call() {
+        spec.commandLine().getErr().println("precedence: a subcommand is required");
+        spec.commandLine().usage(spec.commandLine().getErr());
+        return ExitCodes.BAD_INPUT;
+    }
+
+    /** Builds the command line with the shared error handling; tests call this too. */
+    public static CommandLine commandLine() {
+        ErrorMapper errors = new ErrorMapper();
+        return new CommandLine(new PrecedenceApplication())
+                .setParameterExceptionHandler(errors)
+                .setExecutionExceptionHandler(errors)
+                .setCaseInsensitiveEnumValuesAllowed(true);
+    }
+
+    public static void main(String[] args) {
+        System.exit(commandLine().execute(args));
+    }
+}
