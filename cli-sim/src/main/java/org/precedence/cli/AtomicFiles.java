@@ -9,6 +9,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 
 /**
  * Writes output files so that readers see either the old file or the whole new one, never
@@ -69,6 +73,7 @@ public final class AtomicFiles {
                 }
                 ch.force(true);
             }
+            keepPermissions(temp, absolute);
             try {
                 Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {
@@ -88,6 +93,20 @@ public final class AtomicFiles {
                 }
             }
         }
+    }
+
+    /**
+     * Gives the new file the old file's permissions, or rw-r--r-- for a new file, since temporary
+     * files are created readable by their owner only.
+     */
+    private static void keepPermissions(Path temp, Path target) throws IOException {
+        if (!Files.getFileStore(temp).supportsFileAttributeView(PosixFileAttributeView.class)) {
+            return;
+        }
+        Set<PosixFilePermission> perms = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(temp, perms);
     }
 
     /** Makes the rename durable where the platform allows syncing a directory (not on Windows). */
