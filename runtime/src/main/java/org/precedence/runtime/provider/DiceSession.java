@@ -118,8 +118,12 @@ public final class DiceSession implements TurnOrderSource {
         return new RoundResult(round, orderList, rolls, dice.grade(), dice.id());
     }
 
-    /** Returns round {@code round}'s order as player indices, first to act first. */
+    /** Returns round {@code round}'s order as player indices (through {@link FastOrders}). */
+    @Override
     public int[] orderIndices(long round, int players) {
+        if (players < 1) {
+            throw new IllegalArgumentException("player count must be >= 1, got " + players);
+        }
         int[] out = new int[players];
         fastOrders().orderInto(round, players, out);
         return out;
