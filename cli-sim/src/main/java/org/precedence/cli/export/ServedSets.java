@@ -5,9 +5,14 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.ServiceLoader;
+import org.precedence.api.SessionSeed;
+import org.precedence.api.SessionSpec;
+import org.precedence.api.TurnOrderProvider;
+import org.precedence.api.TurnOrderSource;
 import org.precedence.cli.UserInputException;
 import org.precedence.runtime.dice.ExplicitDice;
 import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.provider.DiceSession;
 import org.precedence.runtime.source.SetSource;
 
 /** Finds the served set for n players and turns it into a {@link PrintableSet}, or says why not. */
@@ -19,13 +24,21 @@ final class ServedSets {
     }
 
     /**
-     * Returns the first {@link SetSource} registered with {@link ServiceLoader}.
+     * Returns the sets the provider on the class path serves: a {@link SetSource} registered
+     * with {@link ServiceLoader} if there is one, else the sets behind the provider's sessions
+     * ({@link DiceSession#sets()}), so that export prints exactly what engines roll.
      *
-     * @throws IllegalStateException if none is installed
+     * @throws IllegalStateException if neither can be found
      */
     static SetSource discover() {
-        return ServiceLoader.load(SetSource.class).findFirst().orElseThrow(() -> new IllegalStateException(
-                "no served sets on the class path (no " + SetSource.class.getName() + " service)"));
+        return ServiceLoader.load(SetSource.class).findFirst().orElseGet(() -> {
+            TurnOrderSource session = TurnOrderProvider.load()
+                    .open(SessionSpec.of(SessionSeed.fromText("precedence-export")));
+            if (session instanceof DiceSession dice) {
+                return dice.sets();
+            }
+            throw new IllegalStateException("the provider on the class path does not say which sets it serves");
+        });
     }
 
     /**

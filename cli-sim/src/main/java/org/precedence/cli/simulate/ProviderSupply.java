@@ -9,10 +9,14 @@ import org.precedence.api.SessionSeed;
 import org.precedence.api.SessionSpec;
 import org.precedence.api.TurnOrderProvider;
 import org.precedence.api.TurnOrderSource;
+import org.precedence.runtime.provider.DiceSession;
+import org.precedence.runtime.provider.FastOrders;
 
 /**
- * Turn orders from a {@link TurnOrderProvider} through the engine-facing {@link
- * TurnOrderSource#roll} call: exactly what an engine gets, one session per session seed.
+ * Turn orders from a {@link TurnOrderProvider}: exactly what an engine gets, one session per
+ * session seed. When the provider's sessions are the runtime's {@link DiceSession}s, the
+ * allocation-free {@link FastOrders} path is used (the runtime tests that it gives the same
+ * orders as {@link TurnOrderSource#roll}); any other provider goes through {@code roll}.
  */
 final class ProviderSupply implements OrderSupply {
     private final TurnOrderProvider provider;
@@ -37,6 +41,13 @@ final class ProviderSupply implements OrderSupply {
         SessionSpec spec = new SessionSpec(SessionSeeds.of(master, session), mode, rule,
                 RankingConvention.LOWEST_FIRST);
         TurnOrderSource source = provider.open(spec);
+        if (source instanceof DiceSession dice) {
+            FastOrders fast = dice.fastOrders();
+            return (round, out) -> {
+                fast.orderInto(round, players, out);
+                return 1;
+            };
+        }
         return (round, out) -> {
             List<Integer> order = source.roll(round, players).order();
             for (int p = 0; p < players; p++) {

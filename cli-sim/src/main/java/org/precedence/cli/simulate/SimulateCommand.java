@@ -19,6 +19,7 @@ import org.precedence.cli.AtomicFiles;
 import org.precedence.cli.ExitCodes;
 import org.precedence.cli.FormatOption;
 import org.precedence.cli.UserInputException;
+import org.precedence.runtime.analysis.RerollExpectation;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -197,7 +198,7 @@ public final class SimulateCommand implements Callable<Integer> {
                 if (compare && !cancellation.requested()) {
                     RerollDiceSupply dice = new RerollDiceSupply(master, compareSides);
                     peers.add(Analysis.of(dice.label(), runner.run(dice, n, sessions, rounds),
-                            sessions, rounds, true, ExpectedThrows.mean(n, compareSides)));
+                            sessions, rounds, true, RerollExpectation.of(n, compareSides).doubleValue()));
                 }
                 counts.add(new SimulationReport.PlayerCount(main, bal, peers));
             }
