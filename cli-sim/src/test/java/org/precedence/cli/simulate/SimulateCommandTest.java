@@ -165,6 +165,23 @@ class SimulateCommandTest {
         }
     }
 
+    @Test
+    void call_benchmarkReportsBothPeersAndRatios() {
+        CommandRun run = simulate(FAIR, "--players", "3", "--sessions", "4", "--rounds", "2000",
+                "--seed", "bench", "--benchmark", "--format", "json");
+        assertEquals(0, run.exitCode(), run.err());
+        JsonObject row = JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("results")
+                .get(0).getAsJsonObject();
+        assertEquals(3, row.get("players").getAsInt());
+        assertEquals(8000, row.get("roundsPerRepetition").getAsLong());
+        double precedence = row.get("precedenceRoundsPerSecond").getAsDouble();
+        double jdk = row.get("collectionsShuffleRoundsPerSecond").getAsDouble();
+        double xoro = row.get("fisherYatesXoroshiroRoundsPerSecond").getAsDouble();
+        assertTrue(precedence > 0 && jdk > 0 && xoro > 0);
+        assertEquals(precedence / jdk, row.get("ratioToCollectionsShuffle").getAsDouble(), 1e-9);
+        assertEquals(precedence / xoro, row.get("ratioToFisherYatesXoroshiro").getAsDouble(), 1e-9);
+    }
+
     private static String[] concat(String[] a, String... b) {
         String[] r = java.util.Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, r, a.length, b.length);

@@ -121,6 +121,19 @@ class SimulationRunnerTest {
     }
 
     @Test
+    void run_plainShufflePeersAreUniform() {
+        // Both peers shuffle fairly; at this fixed seed the Pearson test on 24 rankings must not
+        // reject (deterministic: fixed seed, so this cannot flake).
+        for (OrderSupply peer : new OrderSupply[] {new ShuffleSupply(SEED), new JdkShuffleSupply(SEED),
+            new RerollDiceSupply(SEED, 6)}) {
+            Tally t = run(peer, 4, 20, 2400, 2);
+            assertEquals(48_000, java.util.Arrays.stream(t.rankingCounts()).sum());
+            double p = FrequencyTests.pearsonUniform(t.rankingCounts()).pValue();
+            assertTrue(p > 1e-3, peer.label() + ": p = " + p);
+        }
+    }
+
+    @Test
     void run_moreThanSixPlayersKeepsSeatsOnly() {
         Tally t = run(new ShuffleSupply(SEED), 8, 5, 1000, 2);
         assertEquals(null, t.rankingCounts());
