@@ -14,7 +14,7 @@ import org.precedence.game.rules.Rules;
  * A greedy bot. In order: it concedes (retires) once it cannot reach the leader's glow even by
  * lighting every dark lantern; lights the dark lantern it lies at; gathers when its hold is
  * empty; otherwise sails 1 to 3 places toward the brightest dark lantern in reach, preferring
- * one no other boat lies at (that boat may light it first). Equal choices are broken by a draw
+ * one no other boat lies at (that boat may light it first). Close choices are decided by draws
  * from a generator seeded with (bot seed, round, seat), so the bot is deterministic yet seats
  * with the same view do not all act alike.
  */
@@ -45,7 +45,7 @@ final class RacerBot implements MoveChooser {
         List<Integer> best = new ArrayList<>();
         int bestValue = Integer.MIN_VALUE;
         for (int d = Move.Sail.MIN; d <= Move.Sail.MAX; d++) {
-            int value = valueOf(state, seat, state.board().sail(me.position(), d));
+            int value = valueOf(state, seat, state.board().sail(me.position(), d), random);
             if (value > bestValue) {
                 bestValue = value;
                 best.clear();
@@ -61,15 +61,19 @@ final class RacerBot implements MoveChooser {
         return new Move.Sail(best.get(random.nextInt(best.size())));
     }
 
-    /** Twice the glow of a dark lantern, one less if a rival lies there; 0 for nothing to light. */
-    private static int valueOf(GameState state, int seat, int position) {
+    /**
+     * For a dark lantern: twice its glow, two less if a rival lies there, plus a draw of 0 to 3,
+     * so that boats with the same view (all of them, in the harbour) spread out instead of
+     * racing in a pack. 0 for a place with nothing to light.
+     */
+    private static int valueOf(GameState state, int seat, int position, SplittableRandom random) {
         Island island = state.board().place(position);
         if (!island.hasLantern() || state.owner(position) != GameState.DARK) {
             return 0;
         }
         boolean rivalThere = state.boats().stream()
                 .anyMatch(b -> b.active() && b.seat() != seat && b.position() == position);
-        return 2 * island.glow() - (rivalThere ? 1 : 0);
+        return 2 * island.glow() - (rivalThere ? 2 : 0) + random.nextInt(4);
     }
 
     private static boolean cannotCatchUp(GameState state, int seat) {
