@@ -60,10 +60,11 @@ public final class TableRenderer implements TableListener {
                 + " boats roll set " + start.roll().setId() + " (" + start.roll().grade() + "), "
                 + (convention == RankingConvention.LOWEST_FIRST ? "lowest" : "highest") + " face acts first ==");
         int width = start.roster().stream().mapToInt(s -> state.boat(s).name().length()).max().orElse(8);
+        int faceWidth = start.roll().rolls().stream().mapToInt(r -> r.faceValue().toString().length()).max().orElse(1);
         for (PlayerRoll r : start.roll().rolls()) {
             String name = state.boat(start.roster().get(r.player())).name();
-            out.printf("   %-" + width + "s  die %-2s  face %s  -> acts %s%n", name, r.die(), r.faceValue(),
-                    Ordinals.of(r.position()));
+            out.printf("   %-" + width + "s  die %-2s  face %" + faceWidth + "s  -> acts %s%n", name, r.die(),
+                    r.faceValue(), Ordinals.of(r.position()));
         }
         out.println("   Order: " + names(state, start.order()));
         out.flush();

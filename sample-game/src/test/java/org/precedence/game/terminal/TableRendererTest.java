@@ -29,8 +29,9 @@ class TableRendererTest {
         assertTrue(header >= 0, out);
         for (RollEntry r : first.rolls()) {
             String name = game.seats().get(r.seat()).name();
-            String line = String.format("   %-11s  die %-2s  face %s  -> acts %s", name, r.die(), r.faceValue(),
-                    Ordinals.of(r.position()));
+            int faceWidth = first.rolls().stream().mapToInt(x -> x.faceValue().toString().length()).max().getAsInt();
+            String line = String.format("   %-11s  die %-2s  face %" + faceWidth + "s  -> acts %s", name, r.die(),
+                    r.faceValue(), Ordinals.of(r.position()));
             int at = out.indexOf(line, header);
             assertTrue(at > header, "missing roll line '" + line + "'\n" + out);
             assertTrue(at < out.indexOf(" sails ", header) || !out.substring(header).contains(" sails "));
