@@ -211,9 +211,9 @@ class MatchTest {
     @Test
     void play_sourceAnswersForWrongCount_stopsWithClearError() {
         GameSetup setup = GameSetup.of(3, 3, SEED, RandomnessMode.FAST, 3, 0);
-        TurnOrderSource broken = fixedOrder(setup, List.of(1, 0, 2));
-        when(broken.roll(anyLong(), anyInt())).thenAnswer(call -> new ShuffleProvider().open(setup.sessionSpec())
-                .roll(call.getArgument(0), 2));
+        TurnOrderSource real = new ShuffleProvider().open(setup.sessionSpec());
+        TurnOrderSource broken = mock(TurnOrderSource.class);
+        when(broken.roll(anyLong(), anyInt())).thenAnswer(call -> real.roll(call.getArgument(0), 2));
         Match match = new Match(setup, broken, "broken", Match.choosers(setup, setup.sessionSpec().seed(), s -> null),
                 TableListener.NONE);
         IllegalStateException e = assertThrows(IllegalStateException.class, match::play);
