@@ -4,7 +4,6 @@ import com.google.gson.Gson;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonParseException;
 import java.io.IOException;
-import java.io.Reader;
 import java.io.Writer;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
@@ -104,16 +103,6 @@ public final class GameLogFile {
         out.write(toJson(record));
         out.write('\n');
         out.flush();
-    }
-
-    /** Reads a log from a stream. */
-    public static GameRecord read(Reader in, String where) throws IOException, InvalidLogException {
-        StringBuilder sb = new StringBuilder();
-        char[] buf = new char[8192];
-        for (int n; (n = in.read(buf)) > 0; ) {
-            sb.append(buf, 0, n);
-        }
-        return fromJson(sb.toString(), where);
     }
 
     private static String rootMessage(Throwable e) {
