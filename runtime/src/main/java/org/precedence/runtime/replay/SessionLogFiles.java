@@ -175,6 +175,10 @@ public final class SessionLogFiles {
         Path dir = target.getParent();
         Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
         try {
+            if (Files.getFileStore(tmp).supportsFileAttributeView("posix")) {
+                // Temp files start private (0600); a log is an ordinary readable file.
+                Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+            }
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
                 ByteBuffer buf = ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
                 while (buf.hasRemaining()) {
