@@ -16,6 +16,7 @@ import picocli.CommandLine.HelpCommand;
             HelpCommand.class,
             RollCommand.class,
             ReplayCommand.class,
+            SetCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 
