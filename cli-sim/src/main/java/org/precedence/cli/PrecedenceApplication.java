@@ -17,6 +17,7 @@ import picocli.CommandLine.HelpCommand;
             RollCommand.class,
             ReplayCommand.class,
             SetCommand.class,
+            PlayCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 
