@@ -73,6 +73,12 @@ public record ServiceLimits(int maxBodyBytes, int maxPlayers, int maxSimulationR
                 value, queueCapacity, requestTimeout, responseTimeout, idleTimeout, maxConnections, maxSessionAge);
     }
 
+    /** Returns a copy with other connection timeouts. */
+    public ServiceLimits withTimeouts(Duration request, Duration response, Duration idle) {
+        return new ServiceLimits(maxBodyBytes, maxPlayers, maxSimulationRounds, maxSimulationRolls, maxLogRounds,
+                threads, queueCapacity, request, response, idle, maxConnections, maxSessionAge);
+    }
+
     /** Returns a copy with another session lifetime. */
     public ServiceLimits withMaxSessionAge(Duration value) {
         return new ServiceLimits(maxBodyBytes, maxPlayers, maxSimulationRounds, maxSimulationRolls, maxLogRounds,
