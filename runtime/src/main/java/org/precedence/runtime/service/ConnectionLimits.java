@@ -16,6 +16,9 @@ final class ConnectionLimits {
         setIfAbsent("sun.net.httpserver.maxRspTime", seconds(limits.responseTimeout()));
         setIfAbsent("sun.net.httpserver.idleInterval", seconds(limits.idleTimeout()));
         setIfAbsent("jdk.httpserver.maxConnections", Integer.toString(limits.maxConnections()));
+        // The server writes headers and body separately; with Nagle's algorithm the body then
+        // waits for the client's delayed ACK (about 40 ms on Linux) on every keep-alive request.
+        setIfAbsent("sun.net.httpserver.nodelay", "true");
     }
 
     private static String seconds(java.time.Duration d) {
