@@ -18,6 +18,7 @@ import picocli.CommandLine.HelpCommand;
             ReplayCommand.class,
             SetCommand.class,
             PlayCommand.class,
+            ServeCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 
