@@ -23,16 +23,12 @@ public final class FairDiceProvider implements TurnOrderProvider {
         this.sets = Objects.requireNonNull(sets, "sets");
     }
 
-<<<<<<< HEAD
     /** Returns the standard served sets (what the no-argument constructor uses). */
     public static SetSource standardSets() {
         return DefaultSets.get();
     }
 
-    /** Returns the sets this provider serves. */
-=======
     /** Returns the sets this provider rolls (so a service can describe exactly those). */
->>>>>>> service
     public SetSource sets() {
         return sets;
     }
