@@ -13,6 +13,7 @@ import static org.mockito.Mockito.mock;
 import static org.mockito.Mockito.never;
 import static org.mockito.Mockito.times;
 import static org.mockito.Mockito.verify;
+import static org.mockito.Mockito.doAnswer;
 import static org.mockito.Mockito.when;
 
 import java.math.BigInteger;
@@ -212,8 +213,9 @@ class MatchTest {
     void play_sourceAnswersForWrongCount_stopsWithClearError() {
         GameSetup setup = GameSetup.of(3, 3, SEED, RandomnessMode.FAST, 3, 0);
         TurnOrderSource broken = fixedOrder(setup, List.of(1, 0, 2));
-        when(broken.roll(anyLong(), anyInt())).thenAnswer(call -> new ShuffleProvider().open(setup.sessionSpec())
-                .roll(call.getArgument(0), 2));
+        // doAnswer, not when(): stubbing through when() would call the earlier answer with n = 0.
+        doAnswer(call -> new ShuffleProvider().open(setup.sessionSpec())
+                .roll(call.getArgument(0), 2)).when(broken).roll(anyLong(), anyInt());
         Match match = new Match(setup, broken, "broken", Match.choosers(setup, setup.sessionSpec().seed(), s -> null),
                 TableListener.NONE);
         IllegalStateException e = assertThrows(IllegalStateException.class, match::play);
