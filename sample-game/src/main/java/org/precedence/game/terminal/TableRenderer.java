@@ -15,7 +15,7 @@ import org.precedence.game.rules.Outcome;
 import org.precedence.game.rules.Standing;
 
 /**
- * Prints the table. With {@code verbose} off it prints only the opening line and the result.
+ * Prints the table. With {@code verbose} off it prints only the opening lines and the result.
  * Rounds are always shown with their die rolls first, because the table's promise is that
  * everyone sees why the order is what it is before anyone moves.
  */
