@@ -111,6 +111,10 @@ public final class GameLogFile {
             t = t.getCause();
         }
         String m = t.getMessage();
+        if (t instanceof NullPointerException && m != null && m.matches("[A-Za-z]+")) {
+            // The records' null checks name the field; an unknown enum value also reads as null.
+            return "field '" + m + "' is missing or has an unknown value";
+        }
         return m == null ? t.getClass().getSimpleName() : m.lines().findFirst().orElse(m);
     }
 }
