@@ -14,6 +14,7 @@ import picocli.CommandLine.HelpCommand;
         description = "Exactly fair, tie-free, replayable turn orders for tabletop games.",
         subcommands = {
             HelpCommand.class,
+            VerifyCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 

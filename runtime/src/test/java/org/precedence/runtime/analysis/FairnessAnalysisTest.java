@@ -64,6 +64,7 @@ class FairnessAnalysisTest {
         // (from the entry's comments as summarised in our brief). Exhaustive search here.
         List<Word> fair = OrderFairSearch.find(2, 4, 6);
         assertFalse(fair.isEmpty());
+        System.out.println("order-fair 2/4/6: " + fair.size() + " words, first " + fair.get(0));
         int before = FairnessChecks.ORDER_FAIR_SETS_CHECKED.get();
         for (Word w : fair) {
             FairnessReport r = FairnessChecks.assertExact(w.toDiceSet());
@@ -91,6 +92,8 @@ class FairnessAnalysisTest {
             orbitRepresentatives.add(Symmetry.canonical(w, true));
         }
         assertEquals(6, orbitRepresentatives.size());
+        orbitRepresentatives.stream().map(Word::toString).sorted()
+                .forEach(w -> System.out.println("order-fair 3 x 6: " + w));
         for (Word w : orbitRepresentatives) {
             FairnessReport r = FairnessChecks.assertExact(w.toDiceSet());
             assertTrue(r.orderFair());
