@@ -259,15 +259,21 @@ final class JsonSetFormat {
     private static SetFormatException malformedAt(IOException e, Position fallback) {
         String message = e.getMessage() == null ? "" : e.getMessage().lines().findFirst().orElse("");
         Matcher m = LOCATION.matcher(message);
-        Position at = m.find()
+        boolean located = m.find();
+        Position at = located
                 ? new Position(Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2)))
                 : fallback;
-        String what = m.reset().find() ? message.substring(0, m.start()) : message;
+        String what = located ? message.substring(0, m.start()) : message;
         if (e instanceof EOFException || what.startsWith("End of input")) {
-            what = "the input ends before the set is complete";
-        } else if (what.startsWith("Use JsonReader.setStrictness")) {
+            return at.error("the input ends before the set is complete");
+        }
+        // Gson reports syntax errors just past the offending character; point at it.
+        at = new Position(at.line(), Math.max(1, at.column() - 1));
+        if (what.startsWith("Use JsonReader.setStrictness")) {
             what = "malformed JSON (comments, single quotes, unquoted names, trailing commas and"
                     + " bare words are not allowed)";
+        } else if (what.isEmpty()) {
+            what = "malformed JSON";
         } else {
             what = "malformed JSON: " + Character.toLowerCase(what.charAt(0)) + what.substring(1);
         }

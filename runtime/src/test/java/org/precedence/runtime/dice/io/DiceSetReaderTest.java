@@ -73,7 +73,7 @@ class DiceSetReaderTest {
         assertEquals("line 1, column 16: die 2 has no \"faces\"", jsonError("{\"dice\": [[1], {\"name\": \"x\"}]}"));
         assertEquals("line 1, column 22: member \"dice\" appears twice",
                 jsonError("{\"dice\": [[1], [2]], \"dice\": []}"));
-        assertEquals("line 1, column 23: unexpected content after the set's closing '}'",
+        assertEquals("line 1, column 22: unexpected content after the set's closing '}'",
                 jsonError("{\"dice\": [[1], [2]]} {}"));
         assertEquals("empty input: expected a dice set such as {\"dice\": [[1, 4], [2, 3]]}", jsonError("  \n "));
     }
@@ -101,7 +101,7 @@ class DiceSetReaderTest {
         assertEquals("line 1, column 13: the input ends before the set is complete",
                 jsonError("{\"dice\": [[1"));
         String comment = jsonError("{\"dice\": [[1], [2]] // two dice\n}");
-        assertEquals("line 1, column 22: malformed JSON (comments, single quotes, unquoted names,"
+        assertEquals("line 1, column 21: malformed JSON (comments, single quotes, unquoted names,"
                 + " trailing commas and bare words are not allowed)", comment);
         String unquoted = jsonError("{dice: [[1], [2]]}");
         assertEquals(1, unquoted.indexOf("line 1, column ") == 0 ? 1 : 0, unquoted);
