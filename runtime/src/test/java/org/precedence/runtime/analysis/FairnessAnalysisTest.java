@@ -167,6 +167,33 @@ class FairnessAnalysisTest {
         assertTrue(r.minCount().compareTo(r.maxCount()) < 0);
     }
 
+    @Test
+    void analyse_bigIntegerPath_givesTheSameReport() {
+        SplittableRandom rnd = new SplittableRandom(TestSets.seed("FairnessAnalysisTest.big"));
+        List<Word> words = new java.util.ArrayList<>(OrderFairSearch.find(2, 4, 6));
+        for (int trial = 0; trial < 80; trial++) {
+            int n = 2 + rnd.nextInt(5);
+            words.add(TestSets.randomSet(rnd, TestSets.randomSides(rnd, n, trial % 2 == 0, 50_000)).word());
+        }
+        for (Word w : words) {
+            for (RankingConvention c : RankingConvention.values()) {
+                FairnessReport plain = FairnessAnalysis.analyse(w, c, false);
+                FairnessReport big = FairnessAnalysis.analyse(w, c, true);
+                assertEquals(plain.orderCounts(), big.orderCounts(), w.toString());
+                assertEquals(java.util.Arrays.deepToString(plain.seatCounts()),
+                        java.util.Arrays.deepToString(big.seatCounts()));
+                assertEquals(plain.orderFair(), big.orderFair());
+                assertEquals(plain.seatFair(), big.seatFair());
+                assertEquals(plain.leadFair(), big.leadFair());
+                assertEquals(plain.subsetDepth(), big.subsetDepth());
+                assertEquals(plain.minCount(), big.minCount());
+                assertEquals(plain.maxCount(), big.maxCount());
+                assertEquals(plain.worstRanking(), big.worstRanking());
+                assertEquals(0, plain.totalVariation().compareTo(big.totalVariation()));
+            }
+        }
+    }
+
     /** order-fair ⇒ seat-fair ⇒ lead-fair, on every report the tests see. */
     private static void assertGradesNest(FairnessReport r) {
         assertTrue(!r.orderFair() || r.seatFair(), "order-fair implies seat-fair");

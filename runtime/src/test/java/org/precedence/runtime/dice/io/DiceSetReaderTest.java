@@ -104,7 +104,10 @@ class DiceSetReaderTest {
         assertEquals("line 1, column 21: malformed JSON (comments, single quotes, unquoted names,"
                 + " trailing commas and bare words are not allowed)", comment);
         String unquoted = jsonError("{dice: [[1], [2]]}");
-        assertEquals(1, unquoted.indexOf("line 1, column ") == 0 ? 1 : 0, unquoted);
+        assertEquals("line 1, column 2: malformed JSON (comments, single quotes, unquoted names,"
+                + " trailing commas and bare words are not allowed)", unquoted);
+        assertEquals("line 3, column 9: malformed JSON (comments, single quotes, unquoted names,"
+                + " trailing commas and bare words are not allowed)", e.getMessage());
     }
 
     @Test
