@@ -7,7 +7,7 @@ import java.util.Map;
 
 /** A JSON response: status, the serialized body, and extra headers. */
 record Reply(int status, String json, Map<String, String> headers) {
-    static final Gson GSON = new GsonBuilder().disableHtmlEscaping().create();
+    static final Gson GSON = new GsonBuilder().disableHtmlEscaping().serializeNulls().create();
 
     static Reply ok(JsonObject body) {
         return new Reply(200, GSON.toJson(body), Map.of());

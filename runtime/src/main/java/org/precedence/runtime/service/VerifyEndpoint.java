@@ -24,8 +24,8 @@ import org.precedence.api.TurnOrderSource;
  */
 final class VerifyEndpoint implements Endpoint {
     static final int MAX_REPORTED_MISMATCHES = 20;
-    private static final Set<String> MEMBERS = JsonFields.names("token", "seed", "commitment", "players", "mode",
-            "rule", "convention", "rounds");
+    private static final Set<String> MEMBERS = JsonFields.names("token", "seed", "commitment", "mode", "rule",
+            "convention", "rounds");
     private static final Set<String> ROUND_MEMBERS = JsonFields.names("round", "order", "faceValues");
     private static final int MAX_FACE_VALUE_CHARS = 4096;
 
@@ -98,7 +98,7 @@ final class VerifyEndpoint implements Endpoint {
 
     private SessionSpec spec(JsonFields f) {
         if (f.has("token")) {
-            for (String other : List.of("seed", "players", "mode", "rule", "convention")) {
+            for (String other : List.of("seed", "mode", "rule", "convention")) {
                 if (f.has(other)) {
                     throw ApiException.badRequest("give either \"token\" or \"seed\" with its parameters, not both (\""
                             + other + "\" was given with \"token\")");

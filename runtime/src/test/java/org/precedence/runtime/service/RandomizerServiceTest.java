@@ -282,6 +282,7 @@ class RandomizerServiceTest {
         JsonObject v = ok(client.post("/v1/verify", byToken.toString()), 200);
         assertTrue(v.get("valid").getAsBoolean(), v.toString());
         assertEquals(6, v.get("roundsChecked").getAsInt());
+        assertTrue(v.get("commitmentMatches").isJsonNull(), "no commitment submitted: " + v);
 
         String seed = ok(client.post("/v1/sessions/" + token + "/reveal", ""), 200).get("seed").getAsString();
         JsonObject bySeed = new JsonObject();
