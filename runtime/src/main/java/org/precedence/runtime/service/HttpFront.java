@@ -1,7 +1,5 @@
 package org.precedence.runtime.service;
 
-import com.google.gson.Gson;
-import com.google.gson.GsonBuilder;
 import com.sun.net.httpserver.Headers;
 import com.sun.net.httpserver.HttpExchange;
 import com.sun.net.httpserver.HttpHandler;
@@ -26,7 +24,6 @@ import java.util.Map;
  */
 final class HttpFront implements HttpHandler {
     private static final System.Logger LOG = System.getLogger(HttpFront.class.getName());
-    private static final Gson GSON = new GsonBuilder().disableHtmlEscaping().create();
     private static final int MAX_QUERY_CHARS = 1024;
 
     private final Router router;
@@ -161,7 +158,7 @@ final class HttpFront implements HttpHandler {
     }
 
     private static void write(HttpExchange exchange, Reply reply, String allow, boolean closeAfter) throws IOException {
-        byte[] bytes = GSON.toJson(reply.body()).getBytes(StandardCharsets.UTF_8);
+        byte[] bytes = reply.json().getBytes(StandardCharsets.UTF_8);
         Headers h = exchange.getResponseHeaders();
         h.set("Content-Type", "application/json; charset=utf-8");
         // Tokens and seeds must not linger in shared caches.

@@ -71,7 +71,7 @@ final class SessionEndpoints {
         } catch (IllegalArgumentException e) {
             throw new ApiException(400, "not_served", e.getMessage());
         }
-        return Reply.ok(Shapes.round(result));
+        return Reply.okJson(Shapes.roundJson(result));
     }
 
     /** POST /v1/sessions/{token}/reveal. */

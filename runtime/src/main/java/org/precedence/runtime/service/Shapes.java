@@ -2,6 +2,10 @@ package org.precedence.runtime.service;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
+import com.google.gson.stream.JsonWriter;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
 import java.math.BigInteger;
 import org.precedence.api.PlayerRoll;
 import org.precedence.api.RoundResult;
@@ -82,6 +86,42 @@ final class Shapes {
         o.addProperty("grade", Wire.name(r.grade()));
         o.addProperty("setId", r.setId());
         return o;
+    }
+
+    /**
+     * The same document as {@link #round}, streamed with Gson's {@link JsonWriter} without
+     * building a tree: round requests are the hot path.
+     */
+    static String roundJson(RoundResult r) {
+        StringWriter text = new StringWriter(160 + 96 * r.players());
+        try (JsonWriter w = new JsonWriter(text)) {
+            w.setHtmlSafe(false);
+            w.beginObject();
+            w.name("round").value(r.round());
+            w.name("players").value(r.players());
+            w.name("order").beginArray();
+            for (int p : r.order()) {
+                w.value(p);
+            }
+            w.endArray();
+            w.name("rolls").beginArray();
+            for (PlayerRoll p : r.rolls()) {
+                w.beginObject();
+                w.name("player").value(p.player());
+                w.name("die").value(p.die());
+                w.name("faceIndex").value(p.faceIndex().toString());
+                w.name("faceValue").value(p.faceValue().toString());
+                w.name("position").value(p.position());
+                w.endObject();
+            }
+            w.endArray();
+            w.name("grade").value(Wire.name(r.grade()));
+            w.name("setId").value(r.setId());
+            w.endObject();
+        } catch (IOException e) {
+            throw new UncheckedIOException("a StringWriter does not fail", e);
+        }
+        return text.toString();
     }
 
     /** The public description of a session: everything but the seed. */

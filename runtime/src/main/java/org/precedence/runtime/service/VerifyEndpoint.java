@@ -21,11 +21,13 @@ import org.precedence.api.TurnOrderSource;
  * session is named either by its token, or (after the reveal, by anyone) by the revealed seed
  * and the parameters; a given commitment is checked against the seed. A log that does not
  * verify is a successful request with {@code "valid": false}; only a malformed log is a 400.
+ * A session log in the library's own format ({@code org.precedence.runtime.replay}) may be
+ * submitted instead, as member {@code log} (see {@link LogVerification}).
  */
 final class VerifyEndpoint implements Endpoint {
     static final int MAX_REPORTED_MISMATCHES = 20;
-    private static final Set<String> MEMBERS = JsonFields.names("token", "seed", "commitment", "players", "mode",
-            "rule", "convention", "rounds");
+    private static final Set<String> MEMBERS = JsonFields.names("token", "seed", "commitment", "mode", "rule",
+            "convention", "rounds", "log");
     private static final Set<String> ROUND_MEMBERS = JsonFields.names("round", "order", "faceValues");
     private static final int MAX_FACE_VALUE_CHARS = 4096;
 
@@ -39,6 +41,9 @@ final class VerifyEndpoint implements Endpoint {
     public Reply handle(Request request) {
         request.allowQuery(Set.of());
         JsonFields f = new JsonFields(request.bodyObject(), "", MEMBERS);
+        if (f.has("log")) {
+            return LogVerification.verify(f, backend);
+        }
         SessionSpec spec = spec(f);
         TurnOrderSource source = backend.provider.open(spec);
         Boolean commitmentMatches = null;
@@ -98,7 +103,7 @@ final class VerifyEndpoint implements Endpoint {
 
     private SessionSpec spec(JsonFields f) {
         if (f.has("token")) {
-            for (String other : List.of("seed", "players", "mode", "rule", "convention")) {
+            for (String other : List.of("seed", "mode", "rule", "convention")) {
                 if (f.has(other)) {
                     throw ApiException.badRequest("give either \"token\" or \"seed\" with its parameters, not both (\""
                             + other + "\" was given with \"token\")");

@@ -282,6 +282,7 @@ class RandomizerServiceTest {
         JsonObject v = ok(client.post("/v1/verify", byToken.toString()), 200);
         assertTrue(v.get("valid").getAsBoolean(), v.toString());
         assertEquals(6, v.get("roundsChecked").getAsInt());
+        assertTrue(v.get("commitmentMatches").isJsonNull(), "no commitment submitted: " + v);
 
         String seed = ok(client.post("/v1/sessions/" + token + "/reveal", ""), 200).get("seed").getAsString();
         JsonObject bySeed = new JsonObject();
@@ -415,8 +416,8 @@ class RandomizerServiceTest {
                 int offset = t;
                 jobs.add(() -> {
                     List<JsonObject> got = new ArrayList<>();
-                    for (int k = 0; k < 40; k++) {
-                        got.add(ok(client.get("/v1/sessions/" + token + "/rounds/" + (offset * 40 + k)), 200));
+                    for (int k = 0; k < 25; k++) {
+                        got.add(ok(client.get("/v1/sessions/" + token + "/rounds/" + (offset * 25 + k)), 200));
                     }
                     error(client.post("/v1/sessions", "{\"players\":0}"), 400, "bad_request");
                     return got;
@@ -427,8 +428,8 @@ class RandomizerServiceTest {
             TurnOrderSource library = PROVIDER.open(SessionSpec.of(SessionSeed.fromHex(seed)));
             for (int t = 0; t < 16; t++) {
                 List<JsonObject> got = results.get(t).get();
-                for (int k = 0; k < 40; k++) {
-                    assertEquals(Shapes.round(library.roll(t * 40 + k, 6)), got.get(k));
+                for (int k = 0; k < 25; k++) {
+                    assertEquals(Shapes.round(library.roll(t * 25 + k, 6)), got.get(k));
                 }
             }
         } finally {

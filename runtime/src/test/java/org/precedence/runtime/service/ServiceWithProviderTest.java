@@ -1,9 +1,15 @@
 package org.precedence.runtime.service;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.precedence.runtime.service.ServiceClient.ok;
 
+import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import com.google.gson.JsonPrimitive;
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -18,6 +24,8 @@ import org.precedence.api.SessionSeed;
 import org.precedence.api.SessionSpec;
 import org.precedence.api.TurnOrderSource;
 import org.precedence.runtime.provider.FairDiceProvider;
+import org.precedence.runtime.replay.SessionLogFiles;
+import org.precedence.runtime.replay.SessionRecorder;
 
 /**
  * The service wired to the real provider: for every mode, rule and convention, the rounds served
@@ -71,6 +79,43 @@ class ServiceWithProviderTest {
                 }
             }
         }
+    }
+
+    /** A log written by the library's recorder verifies over HTTP exactly as the library replays it. */
+    @Test
+    void verify_libraryLog_validUntilAltered() {
+        SessionSpec spec = new SessionSpec(SessionSeed.fromText("tidepool-market"), RandomnessMode.SECURE,
+                OrderRule.SNAKE, RankingConvention.LOWEST_FIRST);
+        SessionRecorder recorder = new SessionRecorder(PROVIDER.open(spec));
+        for (long k = 0; k < 5; k++) {
+            recorder.play(k, k == 3 ? List.of("heron", "otter") : List.of("heron", "otter", "lynx"));
+        }
+        String revealed = SessionLogFiles.toJson(recorder.log(true));
+        JsonObject v = ok(client.post("/v1/verify", "{\"log\":" + revealed + "}"), 200);
+        assertTrue(v.get("valid").getAsBoolean(), v.toString());
+        assertEquals(5, v.get("roundsChecked").getAsInt());
+        assertTrue(v.get("mismatch").isJsonNull());
+
+        String committed = SessionLogFiles.toJson(recorder.log(false));
+        ServiceClient.error(client.post("/v1/verify", "{\"log\":" + committed + "}"), 400, "malformed_log");
+        v = ok(client.post("/v1/verify", "{\"log\":" + committed + ",\"seed\":\"" + spec.seed().toHex() + "\"}"), 200);
+        assertTrue(v.get("valid").getAsBoolean(), v.toString());
+
+        JsonObject altered = JsonParser.parseString(revealed).getAsJsonObject();
+        JsonObject round2 = altered.getAsJsonArray("rounds").get(2).getAsJsonObject();
+        JsonArray faces = round2.getAsJsonArray("faces");
+        faces.set(0, new JsonPrimitive(new BigInteger(faces.get(0).getAsString()).add(BigInteger.ONE).toString()));
+        JsonObject body = new JsonObject();
+        body.add("log", altered);
+        v = ok(client.post("/v1/verify", body.toString()), 200);
+        assertFalse(v.get("valid").getAsBoolean());
+        assertEquals(2, v.getAsJsonObject("mismatch").get("round").getAsLong());
+        assertEquals(2, v.get("roundsChecked").getAsInt());
+
+        ServiceClient.error(client.post("/v1/verify", "{\"log\":{\"format\":\"something-else\"}}"), 400,
+                "malformed_log");
+        ServiceClient.error(client.post("/v1/verify", "{\"log\":" + revealed + ",\"rounds\":[]}"), 400,
+                "bad_request");
     }
 
     @Test
