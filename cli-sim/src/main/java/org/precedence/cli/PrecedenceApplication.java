@@ -14,8 +14,14 @@ import picocli.CommandLine.HelpCommand;
         description = "Exactly fair, tie-free, replayable turn orders for tabletop games.",
         subcommands = {
             HelpCommand.class,
+            RollCommand.class,
+            ReplayCommand.class,
+            SetCommand.class,
+            PlayCommand.class,
+            ServeCommand.class,
             org.precedence.cli.simulate.SimulateCommand.class,
             org.precedence.cli.export.ExportCommand.class,
+            VerifyCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 

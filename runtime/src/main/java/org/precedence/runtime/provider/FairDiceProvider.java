@@ -23,6 +23,16 @@ public final class FairDiceProvider implements TurnOrderProvider {
         this.sets = Objects.requireNonNull(sets, "sets");
     }
 
+    /** Returns the standard served sets (what the no-argument constructor uses). */
+    public static SetSource standardSets() {
+        return DefaultSets.get();
+    }
+
+    /** Returns the sets this provider rolls (so a service can describe exactly those). */
+    public SetSource sets() {
+        return sets;
+    }
+
     @Override
     public DiceSession open(SessionSpec spec) {
         return new DiceSession(Objects.requireNonNull(spec, "spec"), sets);
