@@ -175,7 +175,8 @@ public final class SimulateCommand implements Callable<Integer> {
         SimulationRunner runner = new SimulationRunner(threadCount, cancellation, done);
         boolean showProgress = !quiet && Terminal.attached();
         List<SimulationReport.PlayerCount> counts = new ArrayList<>();
-        try (ProgressBar bar = new ProgressBar(err, done, safeMultiply(perRun, runs), showProgress, 1000).start()) {
+        ProgressBar bar = new ProgressBar(err, done, safeMultiply(perRun, runs), showProgress, 1000).start();
+        try {
             OrderSupply fresh = new ProviderSupply(provider, master, mode, OrderRule.FRESH_EACH_ROUND);
             OrderSupply balanced = new ProviderSupply(provider, master, mode, OrderRule.BALANCED_LEAD);
             for (int n : players) {
@@ -202,6 +203,8 @@ public final class SimulateCommand implements Callable<Integer> {
                 }
                 counts.add(new SimulationReport.PlayerCount(main, bal, peers));
             }
+        } finally {
+            bar.close();
         }
         boolean complete = !cancellation.requested() && counts.size() == players.size();
         return new SimulationReport(seed, mode.name().toLowerCase(Locale.ROOT), sessions, rounds, complete, counts);
