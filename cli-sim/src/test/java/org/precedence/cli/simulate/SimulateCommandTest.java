@@ -166,6 +166,38 @@ class SimulateCommandTest {
     }
 
     @Test
+    void call_moreThanSixPlayersReportsSeatsAndLeads(@TempDir Path dir) throws Exception {
+        // 7 dice: "ABCDEFG" followed by its reverse (2 faces per die; any 7-dice set will do
+        // here, this tests the summary path, not fairness).
+        int[] letters = new int[14];
+        for (int i = 0; i < 7; i++) {
+            letters[i] = i;
+            letters[13 - i] = i;
+        }
+        org.precedence.runtime.dice.Word w = org.precedence.runtime.dice.Word.of(7, letters);
+        var report = org.precedence.runtime.analysis.FairnessAnalysis.analyse(w.toDiceSet());
+        ExplicitTestProvider seven = new ExplicitTestProvider(Map.of(7, new org.precedence.runtime.dice.ExplicitDice(
+                "test-7", w.toDiceSet(), report.grade(), report.subsetDepth())));
+        Path svg = dir.resolve("seven.svg");
+        CommandRun run = simulate(seven, "--players", "7", "--sessions", "10", "--rounds", "700",
+                "--seed", "seven", "--format", "json", "--quiet", "--plot", svg.toString());
+        assertTrue(run.exitCode() == 0 || run.exitCode() == 1, run.err());
+        JsonObject o = JsonParser.parseString(run.out()).getAsJsonObject();
+        assertFalse(o.has("orderCounts"), "5,040 rankings are summarised, not listed");
+        assertEquals("seats", o.get("testedOn").getAsString());
+        assertEquals(36, o.get("degreesOfFreedom").getAsInt());
+        assertEquals("first players", o.getAsJsonObject("gTest").get("on").getAsString());
+        long leads = 0;
+        for (var v : o.getAsJsonArray("leadCounts")) {
+            leads += v.getAsLong();
+        }
+        assertEquals(7000, leads);
+        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+        f.setNamespaceAware(true);
+        assertEquals("svg", f.newDocumentBuilder().parse(svg.toFile()).getDocumentElement().getLocalName());
+    }
+
+    @Test
     void call_benchmarkReportsBothPeersAndRatios() {
         CommandRun run = simulate(FAIR, "--players", "3", "--sessions", "4", "--rounds", "2000",
                 "--seed", "bench", "--benchmark", "--format", "json");
