@@ -50,7 +50,7 @@ public final class SimulateCommand implements Callable<Integer> {
     @Mixin
     FormatOption format = new FormatOption();
 
-    @Option(names = "--players", required = true, split = ",", paramLabel = "N[,M...]",
+    @Option(names = "--players", required = true, split = ",", paramLabel = "N",
             description = "Player counts to simulate, e.g. 4 or 3,4,5.")
     List<Integer> players;
 
@@ -90,8 +90,9 @@ public final class SimulateCommand implements Callable<Integer> {
     Integer threads;
 
     @Option(names = "--benchmark",
-            description = "Instead of a report: time the provider against a plain shuffle in this process "
-                    + "(same sessions and rounds) and print rounds per second and their ratio.")
+            description = "Instead of a report: time the provider against two plain shuffles "
+                    + "(Collections.shuffle, and Fisher-Yates over xoroshiro128++) in this process, same "
+                    + "sessions and rounds, and print rounds per second and the ratios.")
     boolean benchmark;
 
     private final Supplier<TurnOrderProvider> providers;

@@ -198,6 +198,24 @@ class SimulateCommandTest {
     }
 
     @Test
+    void call_fivePlayersListsTheExtremesInTextAndAllInJson() {
+        // "ABCDE" followed by its reverse: 2 faces per die, not order-fair (tests the listing only).
+        org.precedence.runtime.dice.Word w = org.precedence.runtime.dice.Word.parse("ABCDEEDCBA");
+        var report = org.precedence.runtime.analysis.FairnessAnalysis.analyse(w.toDiceSet());
+        ExplicitTestProvider five = new ExplicitTestProvider(Map.of(5, new org.precedence.runtime.dice.ExplicitDice(
+                "test-5", w.toDiceSet(), report.grade(), report.subsetDepth())));
+        CommandRun text = simulate(five, "--players", "5", "--sessions", "4", "--rounds", "300", "--seed", "five", "--quiet");
+        assertTrue(text.out().contains("rarest four and commonest four shown"), text.out());
+        CommandRun json = simulate(five, "--players", "5", "--sessions", "4", "--rounds", "300", "--seed", "five",
+                "--quiet", "--format", "json");
+        JsonObject orders = JsonParser.parseString(json.out()).getAsJsonObject().getAsJsonObject("orderCounts");
+        assertEquals(120, orders.size());
+        // Only 2^5 = 32 outcomes exist, so at most 32 rankings can ever appear.
+        assertTrue(orders.entrySet().stream().filter(e -> e.getValue().getAsLong() > 0).count() <= 32);
+        assertEquals(text.exitCode(), json.exitCode());
+    }
+
+    @Test
     void call_benchmarkReportsBothPeersAndRatios() {
         CommandRun run = simulate(FAIR, "--players", "3", "--sessions", "4", "--rounds", "2000",
                 "--seed", "bench", "--benchmark", "--format", "json");
