@@ -52,7 +52,7 @@ public final class ServeCommand implements Callable<Integer> {
     Path keyFile;
 
     @Option(names = "--add-key",
-            description = "Append a fresh key to the key file (it seals new sessions from now on) and exit.")
+            description = "Append a fresh key to the key file (it seals new sessions once the service restarts with the file) and exit.")
     boolean addKey;
 
     @Option(names = "--threads", paramLabel = "N",
