@@ -21,6 +21,7 @@ import picocli.CommandLine.HelpCommand;
             ServeCommand.class,
             org.precedence.cli.simulate.SimulateCommand.class,
             org.precedence.cli.export.ExportCommand.class,
+            VerifyCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 

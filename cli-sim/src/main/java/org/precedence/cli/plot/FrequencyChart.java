@@ -56,7 +56,8 @@ final class FrequencyChart {
         }
         double expectedY = bottom - (p.expected() - yMin) * scale;
         svg.line(left, expectedY, left + plotWidth, expectedY, "#000000", "stroke-width=\"1.5\" stroke-dasharray=\"6 4\"");
-        svg.text(left + plotWidth, expectedY - 4, "even luck: " + whole(p.expected()), 11, "end", "");
+        svg.text(left + plotWidth - 4, expectedY - 5, "even luck: " + whole(p.expected()), 12, "end",
+                "font-weight=\"bold\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\"");
 
         svg.line(left, top, left, bottom, "#555555", "");
         svg.line(left, bottom, left + plotWidth, bottom, "#555555", "");

@@ -11,10 +11,13 @@ import java.util.Locale;
 import java.util.concurrent.atomic.LongAdder;
 
 /**
- * {@code simulate --benchmark}: the provider against a plain shuffle, both through the same
- * simulation loop and tally, in the same process, alternating, so that machine load and JIT
- * state hit both alike. Reports the median of {@value #REPETITIONS} timed repetitions after
- * {@value #WARMUPS} untimed ones, in rounds per second, and the ratio provider / shuffle.
+ * {@code simulate --benchmark}: the provider against two plain shuffles — {@link
+ * java.util.Collections#shuffle(java.util.List, java.util.Random)} with a seeded {@code
+ * Random} (what engines call) and Fisher–Yates over xoroshiro128++ from Apache Commons RNG (the
+ * fastest plain shuffle we know of) — all through the same simulation loop and tally, in the
+ * same process, taking turns, so machine load and JIT state hit them alike. Reports the median
+ * of {@value #REPETITIONS} timed repetitions after {@value #WARMUPS} untimed ones, in rounds
+ * per second, and the provider's ratio to each peer.
  */
 final class Benchmark {
     static final int WARMUPS = 2;
@@ -24,30 +27,38 @@ final class Benchmark {
     }
 
     /** Medians for one player count. */
-    record Row(int players, long roundsPerRepetition, double precedencePerSecond, double shufflePerSecond) {
+    record Row(int players, long roundsPerRepetition, double precedencePerSecond, double jdkShufflePerSecond,
+               double shufflePerSecond) {
         double ratio() {
             return precedencePerSecond / shufflePerSecond;
+        }
+
+        double jdkRatio() {
+            return precedencePerSecond / jdkShufflePerSecond;
         }
     }
 
     record Result(int threads, List<Row> rows) {
     }
 
-    static Result run(OrderSupply precedence, OrderSupply shuffle, List<Integer> players, long sessions,
-                      long rounds, int threads) {
+    static Result run(OrderSupply precedence, OrderSupply jdkShuffle, OrderSupply shuffle, List<Integer> players,
+                      long sessions, long rounds, int threads) {
         List<Row> rows = new ArrayList<>();
         for (int n : players) {
             double[] a = new double[REPETITIONS];
             double[] b = new double[REPETITIONS];
+            double[] c = new double[REPETITIONS];
             for (int rep = -WARMUPS; rep < REPETITIONS; rep++) {
                 double pa = timed(precedence, n, sessions, rounds, threads);
-                double pb = timed(shuffle, n, sessions, rounds, threads);
+                double pb = timed(jdkShuffle, n, sessions, rounds, threads);
+                double pc = timed(shuffle, n, sessions, rounds, threads);
                 if (rep >= 0) {
                     a[rep] = pa;
                     b[rep] = pb;
+                    c[rep] = pc;
                 }
             }
-            rows.add(new Row(n, sessions * rounds, median(a), median(b)));
+            rows.add(new Row(n, sessions * rounds, median(a), median(b), median(c)));
         }
         return new Result(threads, rows);
     }
@@ -81,8 +92,10 @@ final class Benchmark {
                 row.addProperty("players", r.players());
                 row.addProperty("roundsPerRepetition", r.roundsPerRepetition());
                 row.addProperty("precedenceRoundsPerSecond", r.precedencePerSecond());
-                row.addProperty("shuffleRoundsPerSecond", r.shufflePerSecond());
-                row.addProperty("ratio", r.ratio());
+                row.addProperty("collectionsShuffleRoundsPerSecond", r.jdkShufflePerSecond());
+                row.addProperty("fisherYatesXoroshiroRoundsPerSecond", r.shufflePerSecond());
+                row.addProperty("ratioToCollectionsShuffle", r.jdkRatio());
+                row.addProperty("ratioToFisherYatesXoroshiro", r.ratio());
                 rows.add(row);
             }
             o.add("results", rows);
@@ -90,12 +103,15 @@ final class Benchmark {
         } else {
             out.printf(Locale.ROOT, "Benchmark: median of %d runs after %d warm-ups, %d threads, same loop and tally%n",
                     REPETITIONS, WARMUPS, result.threads());
-            out.printf(Locale.ROOT, "  %-8s %14s %22s %22s %8s%n", "players", "rounds/run", "precedence rounds/s",
-                    "shuffle rounds/s", "ratio");
+            out.printf(Locale.ROOT, "  %-8s %14s %16s %22s %22s%n", "players", "rounds/run", "precedence/s",
+                    "Collections.shuffle/s", "Fisher-Yates xoro/s");
             for (Row r : result.rows()) {
-                out.printf(Locale.ROOT, "  %-8d %14s %22s %22s %8.2f%n", r.players(), Format.count(r.roundsPerRepetition()),
-                        Format.fixed(r.precedencePerSecond(), 0), Format.fixed(r.shufflePerSecond(), 0), r.ratio());
+                out.printf(Locale.ROOT, "  %-8d %14s %16s %15s (%.2fx) %15s (%.2fx)%n", r.players(),
+                        Format.count(r.roundsPerRepetition()), Format.fixed(r.precedencePerSecond(), 0),
+                        Format.fixed(r.jdkShufflePerSecond(), 0), r.jdkRatio(),
+                        Format.fixed(r.shufflePerSecond(), 0), r.ratio());
             }
+            out.println("  (x: precedence rounds per second divided by the peer's; above 1 means precedence is faster)");
         }
         out.flush();
     }

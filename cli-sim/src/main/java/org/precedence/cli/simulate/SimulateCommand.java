@@ -136,8 +136,8 @@ public final class SimulateCommand implements Callable<Integer> {
         }
         OrderSupply precedence = new ProviderSupply(provider, master, mode, OrderRule.FRESH_EACH_ROUND);
         if (benchmark) {
-            Benchmark.Result b = Benchmark.run(precedence, new ShuffleSupply(master), players, sessions, rounds,
-                    threadCount);
+            Benchmark.Result b = Benchmark.run(precedence, new JdkShuffleSupply(master), new ShuffleSupply(master),
+                    players, sessions, rounds, threadCount);
             Benchmark.print(b, format.json(), out);
             return ExitCodes.OK;
         }

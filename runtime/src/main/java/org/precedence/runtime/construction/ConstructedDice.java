@@ -60,7 +60,21 @@ public final class ConstructedDice implements MixedRadixDice {
         for (int pos = 0; pos < letters.length; pos++) {
             startPosition[letters[pos]][next[letters[pos]]++] = pos;
         }
-        this.proofs = construction.proofs();
+        List<FamilyProof> levelProofs = construction.proofs();
+        if (construction.hasWordSpecificLevels()) {
+            ComposedCounts counts = ComposedCounts.of(construction);
+            int[] depths = counts.depthAfterLevel();
+            for (int i = 0; i < depths.length; i++) {
+                if (depths[i] < levels.get(i).liftsTo()) {
+                    throw new IllegalStateException(levels.get(i).name() + " reaches depth " + depths[i]
+                            + ", not " + levels.get(i).liftsTo() + ", on its word");
+                }
+            }
+            if (!counts.orderFair()) {
+                throw new IllegalStateException(construction + " is not order-fair by exact count");
+            }
+        }
+        this.proofs = levelProofs;
     }
 
     /** Returns the plan this set follows. */

@@ -64,18 +64,31 @@ public final class Construction {
         return new Construction(StartingWord.letters(players), levels);
     }
 
-    /** The cheapest construction from the letters AB…. */
+    /**
+     * The cheapest construction from the letters AB… using only families uniform on tuples
+     * (no word-specific levels), valid for every n by the family proofs alone.
+     */
+    public static Construction smallestUniform(int players) {
+        return fromStart(StartingWord.letters(players));
+    }
+
+    /** The cheapest construction from the letters AB…, searched plans included. */
     public static Construction smallest(int players) {
         return smallest(players, List.of());
     }
 
     /**
      * The cheapest construction from the letters AB… or any of {@code starts}: for each start
-     * the smallest valid family per level (reversal doubling for depth 2), then the start
-     * giving the fewest sides; ties keep the letters.
+     * the smallest valid family per level (reversal doubling for depth 2), and the shipped
+     * searched plan for this n if any (see {@link LevelSearch}); the fewest sides win, ties
+     * keep the letters.
      */
     public static Construction smallest(int players, List<StartingWord> starts) {
         Construction best = fromStart(StartingWord.letters(players));
+        java.util.Optional<Construction> searched = SearchedPlans.forPlayers(players);
+        if (searched.isPresent() && searched.get().sidesPerDie().compareTo(best.sidesPerDie()) < 0) {
+            best = searched.get();
+        }
         for (StartingWord s : starts) {
             if (s.word().players() != players) {
                 continue;
@@ -112,6 +125,16 @@ public final class Construction {
     /** Levels, first applied first. */
     public List<Level> levels() {
         return levels;
+    }
+
+    /** Returns whether some level is valid only for its particular word (needs exact counts). */
+    public boolean hasWordSpecificLevels() {
+        for (Level l : levels) {
+            if (l.isWordSpecific()) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Returns the exact number of sides of every die. */

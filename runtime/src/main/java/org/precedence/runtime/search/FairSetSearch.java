@@ -40,6 +40,8 @@ import org.precedence.runtime.dice.Word;
  * <p>Every class representative returned is re-verified with {@link FairnessAnalysis}.
  */
 public final class FairSetSearch {
+    /** At most this many class representatives are returned (the least ones); counts stay exact. */
+    public static final int MAX_WORDS = 10_000;
     private static final long PROGRESS_FIRST_MS = 3000;
     private static final long PROGRESS_EVERY_MS = 5000;
 
@@ -166,9 +168,38 @@ public final class FairSetSearch {
             for (int k = 1; k < breadthLevels && !control.stopped(); k++) {
                 reps = expandLevel(pool, reps, k);
             }
+            if (request.stopAfter() > 0) {
+                // Looking for some solutions, not all: well-mixed words first. Solutions have
+                // every pair of dice interleaved evenly, so their restrictions are well mixed.
+                List<Rep> ordered = new ArrayList<>(reps);
+                ordered.sort(Comparator.comparingLong((Rep r) -> spread(r.word()))
+                        .thenComparing(Rep::word, Arrays::compare));
+                reps = ordered;
+            }
             if (!control.stopped()) {
                 finishDepthFirst(pool, reps, breadthLevels);
             }
+        }
+
+        /** How far the word's letters stray from an even spread: the largest prefix deviation. */
+        static long spread(byte[] word) {
+            int letters = 0;
+            for (byte b : word) {
+                letters = Math.max(letters, b + 1);
+            }
+            long[] total = new long[letters];
+            for (byte b : word) {
+                total[b]++;
+            }
+            long[] seen = new long[letters];
+            long worst = 0;
+            for (int i = 0; i < word.length; i++) {
+                seen[word[i]]++;
+                for (int x = 0; x < letters; x++) {
+                    worst = Math.max(worst, Math.abs(seen[x] * word.length - total[x] * (i + 1)));
+                }
+            }
+            return worst;
         }
 
         /** Expands every representative on k dice into the representatives on k+1 dice. */
@@ -241,8 +272,8 @@ public final class FairSetSearch {
                 raw.add(k.word());
             }
             raw.sort(Arrays::compare);
-            List<Word> out = new ArrayList<>(raw.size());
-            for (byte[] w : raw) {
+            List<Word> out = new ArrayList<>(Math.min(raw.size(), MAX_WORDS));
+            for (byte[] w : raw.subList(0, Math.min(raw.size(), MAX_WORDS))) {
                 int[] letters = new int[w.length];
                 for (int i = 0; i < w.length; i++) {
                     letters[i] = w[i];

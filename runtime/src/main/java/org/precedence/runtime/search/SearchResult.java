@@ -15,8 +15,9 @@ import org.precedence.runtime.dice.Word;
  *                   meaningful only when complete
  * @param classes    number of those up to renaming equal-sided dice and reversing the word;
  *                   when incomplete, the number of classes found so far
- * @param words      one representative per class found (the least word of the class), sorted;
- *                   each has been re-verified with the exact analysis
+ * @param words      one representative per class found (the least word of the class), sorted,
+ *                   at most {@link FairSetSearch#MAX_WORDS} of them; each has been
+ *                   re-verified with the exact analysis
  * @param reason     why the answer is immediate (a divisibility bound fails) or why the search
  *                   stopped early, else null
  * @param elapsedMs  wall-clock time of the run

@@ -14,9 +14,14 @@ import org.precedence.runtime.dice.Word;
 class ComposedCountsTest {
 
     @Test
-    void servedConstructions_twoToSix_allRankingsEqual() {
+    void servedAndUniformConstructions_twoToSix_allRankingsEqual() {
+        List<Construction> served = new java.util.ArrayList<>();
         for (int n = 2; n <= 6; n++) {
-            Construction c = Construction.smallest(n);
+            served.add(Construction.smallest(n));
+            served.add(Construction.smallestUniform(n));
+        }
+        for (Construction c : served) {
+            int n = c.players();
             ComposedCounts counts = ComposedCounts.of(c);
             assertEquals(Families.factorial(n).intValueExact(), counts.rankingCounts().size());
             assertTrue(counts.orderFair(), "n=" + n);
@@ -34,7 +39,8 @@ class ComposedCountsTest {
     @Test
     void composedCounts_equalPatternTableOnMaterialisedWords() {
         for (Construction c : List.of(Construction.smallest(2), Construction.smallest(3),
-                Construction.smallest(4), Construction.plain(3), Construction.plain(4))) {
+                Construction.smallest(4), Construction.smallest(5), Construction.smallestUniform(3),
+                Construction.smallestUniform(4), Construction.plain(3), Construction.plain(4))) {
             Word word = Materialise.byDefinition(c);
             PatternTable table = PatternTable.count(word);
             ComposedCounts composed = ComposedCounts.of(c);

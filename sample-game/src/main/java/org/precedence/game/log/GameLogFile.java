@@ -4,7 +4,6 @@ import com.google.gson.Gson;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonParseException;
 import java.io.IOException;
-import java.io.Reader;
 import java.io.Writer;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
@@ -106,22 +105,16 @@ public final class GameLogFile {
         out.flush();
     }
 
-    /** Reads a log from a stream. */
-    public static GameRecord read(Reader in, String where) throws IOException, InvalidLogException {
-        StringBuilder sb = new StringBuilder();
-        char[] buf = new char[8192];
-        for (int n; (n = in.read(buf)) > 0; ) {
-            sb.append(buf, 0, n);
-        }
-        return fromJson(sb.toString(), where);
-    }
-
     private static String rootMessage(Throwable e) {
         Throwable t = e;
         while (t.getCause() != null && t.getCause() != t) {
             t = t.getCause();
         }
         String m = t.getMessage();
+        if (t instanceof NullPointerException && m != null && m.matches("[A-Za-z]+")) {
+            // The records' null checks name the field; an unknown enum value also reads as null.
+            return "field '" + m + "' is missing or has an unknown value";
+        }
         return m == null ? t.getClass().getSimpleName() : m.lines().findFirst().orElse(m);
     }
 }

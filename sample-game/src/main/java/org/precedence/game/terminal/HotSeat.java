@@ -37,7 +37,7 @@ public final class HotSeat implements MoveChooser {
     @Override
     public Move choose(GameState state, int seat, int round) {
         while (true) {
-            out.print(BoardView.boat(state, seat) + ". Your move (" + MoveParser.ALLOWED + ", help, board)> ");
+            out.print(BoardView.boat(state, seat) + ". Your move (help lists them)> ");
             out.flush();
             String line = readLine();
             if (line == null) {
@@ -51,6 +51,7 @@ public final class HotSeat implements MoveChooser {
                         + " oil, scores its glow)");
                 out.println("  gather  take on 1 oil (hold: at most " + Rules.MAX_OIL + ")");
                 out.println("  retire  leave the game; your lanterns go dark");
+                out.println("  board   show the board and every boat");
                 continue;
             }
             if (word.equals("board")) {

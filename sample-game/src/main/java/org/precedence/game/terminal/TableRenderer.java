@@ -15,7 +15,7 @@ import org.precedence.game.rules.Outcome;
 import org.precedence.game.rules.Standing;
 
 /**
- * Prints the table. With {@code verbose} off it prints only the opening line and the result.
+ * Prints the table. With {@code verbose} off it prints only the opening lines and the result.
  * Rounds are always shown with their die rolls first, because the table's promise is that
  * everyone sees why the order is what it is before anyone moves.
  */
@@ -115,8 +115,8 @@ public final class TableRenderer implements TableListener {
         int place = 1;
         for (Standing s : outcome.standings()) {
             if (s.active()) {
-                out.printf("  %d. %-12s %2d glow  %d lanterns  %d oil%n", place++, s.name(), s.score(), s.lanterns(),
-                        s.oil());
+                out.printf("  %d. %-12s %2d glow  %d lantern%s  %d oil%n", place++, s.name(), s.score(), s.lanterns(),
+                        s.lanterns() == 1 ? " " : "s", s.oil());
             } else {
                 out.printf("  -  %-12s left the game%n", s.name());
             }

@@ -13,12 +13,13 @@ import static org.mockito.Mockito.mock;
 import static org.mockito.Mockito.never;
 import static org.mockito.Mockito.times;
 import static org.mockito.Mockito.verify;
-import static org.mockito.Mockito.doAnswer;
 import static org.mockito.Mockito.when;
 
 import java.math.BigInteger;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.mockito.InOrder;
 import org.precedence.api.FairnessGrade;
@@ -212,10 +213,9 @@ class MatchTest {
     @Test
     void play_sourceAnswersForWrongCount_stopsWithClearError() {
         GameSetup setup = GameSetup.of(3, 3, SEED, RandomnessMode.FAST, 3, 0);
-        TurnOrderSource broken = fixedOrder(setup, List.of(1, 0, 2));
-        // doAnswer, not when(): stubbing through when() would call the earlier answer with n = 0.
-        doAnswer(call -> new ShuffleProvider().open(setup.sessionSpec())
-                .roll(call.getArgument(0), 2)).when(broken).roll(anyLong(), anyInt());
+        TurnOrderSource real = new ShuffleProvider().open(setup.sessionSpec());
+        TurnOrderSource broken = mock(TurnOrderSource.class);
+        when(broken.roll(anyLong(), anyInt())).thenAnswer(call -> real.roll(call.getArgument(0), 2));
         Match match = new Match(setup, broken, "broken", Match.choosers(setup, setup.sessionSpec().seed(), s -> null),
                 TableListener.NONE);
         IllegalStateException e = assertThrows(IllegalStateException.class, match::play);
@@ -237,5 +237,62 @@ class MatchTest {
         playBots(setup, source, TableListener.NONE);
         verify(source, never()).order(anyLong(), any());
         verify(source, never()).roll(anyLong(), org.mockito.ArgumentMatchers.intThat(n -> n < 2));
+    }
+
+    @Test
+    void play_boatRetiresMidRound_nextRoundRolledForTheRest() {
+        GameSetup setup = GameSetup.of(4, 0, SEED, RandomnessMode.FAST, 3, 0);
+        TurnOrderSource source = countingSource(setup);
+        MoveChooser people = (state, seat, round) -> seat == 2 && round == 1 ? new Move.Retire() : new Move.Sail(1);
+        RosterWatch watch = new RosterWatch();
+        GameRecord record = new Match(setup, source, "test-shuffle", List.of(people, people, people, people), watch)
+                .play();
+        InOrder inOrder = inOrder(source);
+        inOrder.verify(source).roll(0L, 4);
+        inOrder.verify(source).roll(1L, 3);
+        inOrder.verify(source).roll(2L, 3);
+        verify(source, times(3)).roll(anyLong(), anyInt());
+        assertEquals(List.of(List.of(0, 1, 2, 3), List.of(0, 1, 3), List.of(0, 1, 3)), watch.rolledFor);
+        assertEquals(watch.liveAtRoll, watch.rolledFor);
+    }
+
+    /**
+     * Exact check of the claim that a boat retiring mid-round leaves the others' order fair:
+     * over all 4! = 24 equally likely orders of four boats, with one boat retiring at its turn,
+     * the other three act in each of their 3! = 6 relative orders exactly 24 / 6 = 4 times
+     * (first principles: restricting a uniform permutation to a subset is uniform).
+     */
+    @Test
+    void play_retireMidRound_remainingOrderStillUniform() {
+        GameSetup setup = GameSetup.of(4, 0, SEED, RandomnessMode.FAST, 1, 0);
+        MoveChooser people = (state, seat, round) -> seat == 1 ? new Move.Retire() : new Move.Sail(2);
+        Map<List<Integer>, Integer> counts = new HashMap<>();
+        for (List<Integer> order : permutations(List.of(0, 1, 2, 3))) {
+            GameRecord record = new Match(setup, fixedOrder(setup, order), "fixed", List.of(people, people, people,
+                    people), TableListener.NONE).play();
+            List<Integer> others = record.rounds().get(0).moves().stream().filter(m -> !m.move().equals("retire"))
+                    .map(MoveEntry::seat).toList();
+            counts.merge(others, 1, Integer::sum);
+        }
+        assertEquals(6, counts.size());
+        assertTrue(counts.values().stream().allMatch(c -> c == 4), counts.toString());
+    }
+
+    private static List<List<Integer>> permutations(List<Integer> items) {
+        if (items.isEmpty()) {
+            return List.of(List.of());
+        }
+        List<List<Integer>> out = new ArrayList<>();
+        for (Integer first : items) {
+            List<Integer> rest = new ArrayList<>(items);
+            rest.remove(first);
+            for (List<Integer> tail : permutations(rest)) {
+                List<Integer> p = new ArrayList<>();
+                p.add(first);
+                p.addAll(tail);
+                out.add(p);
+            }
+        }
+        return out;
     }
 }

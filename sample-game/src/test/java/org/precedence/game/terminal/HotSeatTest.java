@@ -30,8 +30,7 @@ class HotSeatTest {
     @Test
     void choose_malformedAndIllegalInput_reasonThenSamePromptAgain() {
         String[] lines = play("jump\nsail 9\nlight\n\nsail 2\n", new Move.Sail(2));
-        String prompt = "Saltmoth at Lowmarket Harbour, oil 2, glow 0 (0 lanterns). Your move (sail 1|2|3, light,"
-                + " gather or retire, help, board)> ";
+        String prompt = "Saltmoth at Lowmarket Harbour, oil 2, glow 0 (0 lanterns). Your move (help lists them)> ";
         assertEquals(prompt + "  unknown move 'jump': type sail 1|2|3, light, gather or retire", lines[0]);
         assertEquals(prompt + "  a boat sails 1 to 3 places, got 9", lines[1]);
         assertEquals(prompt + "  not allowed: Lowmarket Harbour has no lantern to light", lines[2]);
