@@ -10,6 +10,7 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.LongAdder;
+import java.util.function.Consumer;
 import java.util.function.Supplier;
 import org.precedence.api.OrderRule;
 import org.precedence.api.RandomnessMode;
@@ -97,16 +98,23 @@ public final class SimulateCommand implements Callable<Integer> {
 
     private final Supplier<TurnOrderProvider> providers;
     private final boolean handleInterrupt;
+    private final Consumer<Cancellation> onStart;
 
     /** The command as the application runs it: the provider on the class path, Ctrl-C handled. */
     public SimulateCommand() {
-        this(TurnOrderProvider::load, true);
+        this(TurnOrderProvider::load, true, c -> { });
     }
 
     /** For tests: a given provider, and no shutdown hook. */
     SimulateCommand(Supplier<TurnOrderProvider> providers, boolean handleInterrupt) {
+        this(providers, handleInterrupt, c -> { });
+    }
+
+    /** For tests: also hands over the run's cancellation, as a Ctrl-C would use it. */
+    SimulateCommand(Supplier<TurnOrderProvider> providers, boolean handleInterrupt, Consumer<Cancellation> onStart) {
         this.providers = Objects.requireNonNull(providers, "providers");
         this.handleInterrupt = handleInterrupt;
+        this.onStart = Objects.requireNonNull(onStart, "onStart");
     }
 
     @Override
@@ -147,6 +155,7 @@ public final class SimulateCommand implements Callable<Integer> {
         if (handleInterrupt) {
             cancellation.installOnInterrupt();
         }
+        onStart.accept(cancellation);
         try {
             SimulationReport report = simulate(provider, master, threadCount, cancellation, err);
             if (format.json()) {
@@ -208,7 +217,8 @@ public final class SimulateCommand implements Callable<Integer> {
             bar.close();
         }
         boolean complete = !cancellation.requested() && counts.size() == players.size();
-        return new SimulationReport(seed, mode.name().toLowerCase(Locale.ROOT), sessions, rounds, complete, counts);
+        return new SimulationReport(seed, mode.name().toLowerCase(Locale.ROOT), sessions, rounds, complete,
+                List.copyOf(players), counts);
     }
 
     private SessionSeed parseSeed() {

@@ -216,6 +216,65 @@ class SimulateCommandTest {
     }
 
     @Test
+    void call_interruptedRunPrintsThePartialResult() {
+        // What Ctrl-C does (through the shutdown hook): request cancellation while the run is
+        // going. Here it is requested from inside the provider after 20,000 rolls.
+        java.util.concurrent.atomic.AtomicReference<Cancellation> cancel = new java.util.concurrent.atomic.AtomicReference<>();
+        java.util.concurrent.atomic.AtomicLong rolls = new java.util.concurrent.atomic.AtomicLong();
+        org.precedence.api.TurnOrderProvider stopping = new org.precedence.api.TurnOrderProvider() {
+            @Override
+            public org.precedence.api.TurnOrderSource open(org.precedence.api.SessionSpec spec) {
+                org.precedence.api.TurnOrderSource inner = FAIR.open(spec);
+                return new org.precedence.api.TurnOrderSource() {
+                    @Override
+                    public org.precedence.api.SessionSpec spec() {
+                        return spec;
+                    }
+
+                    @Override
+                    public org.precedence.api.RoundResult roll(long round, int playerCount) {
+                        if (rolls.incrementAndGet() == 20_000) {
+                            cancel.get().request();
+                        }
+                        return inner.roll(round, playerCount);
+                    }
+                };
+            }
+
+            @Override
+            public int maxPlayers() {
+                return FAIR.maxPlayers();
+            }
+
+            @Override
+            public String name() {
+                return "stopping";
+            }
+        };
+        String[] args = {"--players", "3,4", "--sessions", "10", "--rounds", "10000", "--seed", "stop",
+            "--quiet", "--threads", "2"};
+        CommandRun json = CommandRun.of(new SimulateCommand(() -> stopping, false, cancel::set),
+                concat(args, "--format", "json"));
+        assertEquals(0, json.exitCode(), json.err());
+        JsonObject root = JsonParser.parseString(json.out()).getAsJsonObject();
+        assertFalse(root.get("complete").getAsBoolean());
+        assertEquals(2, root.getAsJsonArray("playerCounts").size(), "the shape follows what was asked for");
+        assertEquals(1, root.getAsJsonArray("results").size(), "stopped during the first player count");
+        JsonObject o = root.getAsJsonArray("results").get(0).getAsJsonObject();
+        assertFalse(o.get("complete").getAsBoolean());
+        assertEquals(3, o.get("players").getAsInt());
+        long rounds = o.get("rounds").getAsLong();
+        assertTrue(rounds >= 20_000 - 2 && rounds < 100_000, "partial: " + rounds);
+        long sum = o.getAsJsonObject("orderCounts").entrySet().stream().mapToLong(e -> e.getValue().getAsLong()).sum();
+        assertEquals(rounds, sum, "counts add up to the rounds simulated");
+
+        rolls.set(0);
+        CommandRun text = CommandRun.of(new SimulateCommand(() -> stopping, false, cancel::set), args);
+        assertTrue(text.out().contains("INTERRUPTED"), text.out());
+        assertTrue(text.out().contains("(partial)"));
+    }
+
+    @Test
     void call_benchmarkReportsBothPeersAndRatios() {
         CommandRun run = simulate(FAIR, "--players", "3", "--sessions", "4", "--rounds", "2000",
                 "--seed", "bench", "--benchmark", "--format", "json");
