@@ -63,8 +63,9 @@ public final class SimulateCommand implements Callable<Integer> {
             description = "Rounds per session (default: ${DEFAULT-VALUE}).")
     long rounds;
 
-    @Option(names = "--seed", required = true, paramLabel = "X",
-            description = "Simulation seed: any text, or hex: and 64 hex digits. Session 0 uses it as is.")
+    @Option(names = "--seed", paramLabel = "X",
+            description = "Simulation seed: any text, or hex: and 64 hex digits. Session 0 uses it as is. "
+                    + "Default: a fresh random seed, printed in the report so the run can be repeated.")
     String seed;
 
     @Option(names = "--mode", paramLabel = "MODE", defaultValue = "fast",
@@ -222,6 +223,11 @@ public final class SimulateCommand implements Callable<Integer> {
     }
 
     private SessionSeed parseSeed() {
+        if (seed == null) {
+            // No seed given: draw one, and keep it in the hex form the report prints, so that
+            // passing it back as --seed repeats the run exactly.
+            seed = "hex:" + SessionSeed.random().toHex();
+        }
         try {
             return SessionSeed.parse(seed);
         } catch (IllegalArgumentException e) {

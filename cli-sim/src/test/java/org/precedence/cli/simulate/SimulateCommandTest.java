@@ -45,6 +45,18 @@ class SimulateCommandTest {
     }
 
     @Test
+    void call_withoutSeed_drawsOneAndPrintsItSoTheRunRepeats() {
+        CommandRun first = simulate(FAIR, "--players", "3", "--sessions", "5", "--rounds", "50",
+                "--format", "json", "--quiet");
+        assertEquals(0, first.exitCode(), first.err());
+        String seed = JsonParser.parseString(first.out()).getAsJsonObject().get("seed").getAsString();
+        assertTrue(seed.matches("hex:[0-9a-f]{64}"), seed);
+        CommandRun again = simulate(FAIR, "--players", "3", "--sessions", "5", "--rounds", "50",
+                "--format", "json", "--quiet", "--seed", seed);
+        assertEquals(first.out(), again.out());
+    }
+
+    @Test
     void call_unfairSetIsFlagged() {
         CommandRun run = simulate(UNFAIR, "--players", "3", "--sessions", "20", "--rounds", "500",
                 "--seed", "meadow", "--format", "json", "--quiet");
@@ -150,7 +162,6 @@ class SimulateCommandTest {
             {"--players", "3", "--seed", "x", "--plot", dir.resolve("missing/dir/p.svg").toString()},
             {"--players", "3", "--seed", "x", "--plot", dir.toString()},
             {"--players", "3", "--seed", "x", "--plot", dir.resolve("p.png").toString()},
-            {"--players", "3"},
         };
         for (String[] args : bad) {
             CommandRun run = simulate(FAIR, args);
