@@ -14,6 +14,8 @@ import picocli.CommandLine.HelpCommand;
         description = "Exactly fair, tie-free, replayable turn orders for tabletop games.",
         subcommands = {
             HelpCommand.class,
+            SearchCommand.class,
+            CatalogCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 
