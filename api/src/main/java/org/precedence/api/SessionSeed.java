@@ -67,11 +67,19 @@ public final class SessionSeed {
             throw new IllegalArgumentException("a hex seed has exactly " + (2 * BYTES)
                     + " hexadecimal digits, got " + hex.length());
         }
-        try {
-            return new SessionSeed(HEX.parseHex(hex));
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("a hex seed may only contain 0-9 and a-f: " + hex, e);
+        for (int i = 0; i < hex.length(); i++) {
+            if (Character.digit(hex.charAt(i), 16) < 0) {
+                // The text may be a secret: name the position, not the digits.
+                throw new IllegalArgumentException("a hex seed may only contain 0-9 and a-f; character "
+                        + (i + 1) + " is not a hexadecimal digit");
+            }
         }
+        return new SessionSeed(HEX.parseHex(hex));
+    }
+
+    /** Derives a seed from a number: the same as {@link #fromText} of its decimal form. */
+    public static SessionSeed fromNumber(long number) {
+        return fromText(Long.toString(number));
     }
 
     /** Reads {@code hex:<64 hex digits>} as raw bytes, anything else as {@link #fromText text}. */

@@ -11,6 +11,11 @@ public interface TurnOrderProvider {
     /** Opens a session; the same spec always yields the same rounds. */
     TurnOrderSource open(SessionSpec spec);
 
+    /** Opens a session with {@link SessionSpec#of(SessionSeed) the default spec} for {@code seed}. */
+    default TurnOrderSource open(SessionSeed seed) {
+        return open(SessionSpec.of(seed));
+    }
+
     /** The largest player count this provider serves. */
     int maxPlayers();
 

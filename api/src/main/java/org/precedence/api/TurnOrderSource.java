@@ -28,6 +28,22 @@ public interface TurnOrderSource {
     RoundResult roll(long round, int playerCount);
 
     /**
+     * Returns round {@code round}'s order as player indices, first to act first: the order of
+     * {@link #roll}, without the faces. A single player is always {@code [0]}.
+     *
+     * @throws IllegalArgumentException if {@code round < 0} or the player count is not served
+     */
+    default int[] orderIndices(long round, int playerCount) {
+        if (round < 0) {
+            throw new IllegalArgumentException("round must be >= 0, got " + round);
+        }
+        if (playerCount == 1) {
+            return new int[] {0};
+        }
+        return roll(round, playerCount).order().stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /**
      * Returns this round's players in acting order: the drop-in replacement for
      * {@code Collections.shuffle(players)}. The list is not modified.
      *

@@ -61,9 +61,7 @@ public final class DiceSet {
             Map<String, Integer> seenNames = new HashMap<>();
             for (int d = 0; d < n; d++) {
                 String name = names.get(d);
-                if (name == null || name.isBlank()) {
-                    throw new InvalidDiceSetException("die " + DieNames.of(d) + " has a blank name");
-                }
+                checkName(d, name);
                 Integer prior = seenNames.putIfAbsent(name, d);
                 if (prior != null) {
                     throw new InvalidDiceSetException("dice " + DieNames.of(prior) + " and "
@@ -91,6 +89,48 @@ public final class DiceSet {
             }
         }
         return new DiceSet(copy, List.copyOf(resolved));
+    }
+
+    /** Longest die name accepted. */
+    public static final int MAX_NAME_LENGTH = 64;
+
+    /**
+     * Names must be non-blank, at most {@link #MAX_NAME_LENGTH} characters, without leading or
+     * trailing white space and without control characters, so they print on one line.
+     *
+     * @param d    index of the die (for the message)
+     * @param name the proposed name
+     * @throws InvalidDiceSetException saying what is wrong with the name
+     */
+    public static void checkName(int d, String name) {
+        String die = "die " + DieNames.of(d);
+        if (name == null || name.isBlank()) {
+            throw new InvalidDiceSetException(die + " has a blank name");
+        }
+        if (name.length() > MAX_NAME_LENGTH) {
+            throw new InvalidDiceSetException("name of " + die + " is " + name.length()
+                    + " characters long; at most " + MAX_NAME_LENGTH + " are allowed");
+        }
+        if (!name.strip().equals(name)) {
+            throw new InvalidDiceSetException("name of " + die + " ('" + name
+                    + "') starts or ends with white space");
+        }
+        for (int i = 0; i < name.length(); i++) {
+            if (Character.isISOControl(name.charAt(i))) {
+                throw new InvalidDiceSetException("name of " + die + " contains control character U+"
+                        + String.format("%04X", (int) name.charAt(i)) + " at character " + (i + 1));
+            }
+        }
+    }
+
+    /** Returns whether the dice carry the default names A, B, C, … in order. */
+    public boolean hasDefaultNames() {
+        for (int d = 0; d < names.size(); d++) {
+            if (!names.get(d).equals(DieNames.of(d))) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Returns the number of dice. */
@@ -172,6 +212,16 @@ public final class DiceSet {
 
     /** Returns the subset of the given dice (in the order given), values and names kept. */
     public DiceSet subset(int... dice) {
+        boolean[] taken = new boolean[faces.length];
+        for (int d : dice) {
+            if (d < 0 || d >= faces.length) {
+                throw new IllegalArgumentException("die index " + d + " outside 0.." + (faces.length - 1));
+            }
+            if (taken[d]) {
+                throw new IllegalArgumentException("die " + names.get(d) + " chosen twice");
+            }
+            taken[d] = true;
+        }
         List<long[]> f = new ArrayList<>();
         List<String> n = new ArrayList<>();
         for (int d : dice) {

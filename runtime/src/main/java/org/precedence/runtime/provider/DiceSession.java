@@ -1,0 +1,136 @@
+package org.precedence.runtime.provider;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import org.precedence.api.FairnessGrade;
+import org.precedence.api.PlayerRoll;
+import org.precedence.api.RoundResult;
+import org.precedence.api.SessionSpec;
+import org.precedence.api.TurnOrderSource;
+import org.precedence.runtime.dice.DieNames;
+import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.randomness.RollGenerator;
+import org.precedence.runtime.randomness.SeededFaces;
+import org.precedence.runtime.source.SetSource;
+
+/**
+ * A session: every round rolled with order-fair dice from a {@link SetSource}, the words from
+ * the spec's {@link org.precedence.api.RandomnessMode}, the order by the spec's rule.
+ *
+ * <p><b>Roster changes.</b> A round with n players rolls the order-fair set served for n; die
+ * i goes to the player at roster index i. Rounds do not remember earlier rounds, so players
+ * may join or leave between any two rounds; what a rule guarantees across rounds holds among
+ * the rounds played with the same count (see {@link org.precedence.api.OrderRule}).
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class DiceSession implements TurnOrderSource {
+    private final SessionSpec spec;
+    private final SetSource sets;
+    private final RollGenerator generator;
+
+    DiceSession(SessionSpec spec, SetSource sets) {
+        this.spec = Objects.requireNonNull(spec, "spec");
+        this.sets = Objects.requireNonNull(sets, "sets");
+        this.generator = RollGenerator.of(spec.mode(), spec.seed());
+    }
+
+    /** Opens a session over {@code sets} directly (the provider does this for engines). */
+    public static DiceSession open(SessionSpec spec, SetSource sets) {
+        return new DiceSession(spec, sets);
+    }
+
+    @Override
+    public SessionSpec spec() {
+        return spec;
+    }
+
+    /** Returns the id of the algorithm that turns the seed into words (recorded in logs). */
+    public String algorithmId() {
+        return generator.algorithmId();
+    }
+
+    /** Returns the source of the sets this session rolls. */
+    public SetSource sets() {
+        return sets;
+    }
+
+    /** Returns the largest player count served. */
+    public int maxPlayers() {
+        return sets.maxPlayers();
+    }
+
+    RollGenerator generator() {
+        return generator;
+    }
+
+    /**
+     * Returns the order-fair set that {@code players} players roll.
+     *
+     * @throws IllegalArgumentException if the count is outside 2..{@link #maxPlayers()}
+     */
+    public MixedRadixDice setFor(int players) {
+        Validation.requireServedCount(players, sets.maxPlayers());
+        MixedRadixDice dice = sets.forPlayers(players, FairnessGrade.ORDER_FAIR);
+        if (dice.players() != players || !dice.grade().atLeast(FairnessGrade.ORDER_FAIR)) {
+            throw new IllegalStateException("set source served " + dice.id() + " (" + dice.players()
+                    + " dice, " + dice.grade() + ") when asked for " + players + " order-fair dice");
+        }
+        return dice;
+    }
+
+    /**
+     * {@inheritDoc}
+     *
+     * <p>The rolls reported are those of the stream-0 draw behind the order (round k for
+     * FRESH_EACH_ROUND and BALANCED_LEAD, round 0 for FIRST_PLAYER_THEN_SEATING and SNAKE);
+     * each roll's position is the player's place in this round's order.
+     *
+     * @throws IllegalArgumentException if {@code round < 0} or the count is outside
+     *                                  2..{@link #maxPlayers()}
+     */
+    @Override
+    public RoundResult roll(long round, int playerCount) {
+        Validation.requireRound(round);
+        MixedRadixDice dice = setFor(playerCount);
+        long shownIndex = Streams.facesIndex(spec.rule(), round);
+        SeededFaces[] shown = new SeededFaces[1];
+        Ranker ranker = (stream, index, n, out) -> {
+            SeededFaces f = LazyRanker.rankInto(generator, dice, spec.convention(), stream, index, out);
+            if (stream == Streams.ROUND && index == shownIndex) {
+                shown[0] = f;
+            }
+        };
+        int[] order = new int[playerCount];
+        RuleOrders.orderInto(spec.rule(), round, playerCount, ranker, order, new int[playerCount]);
+        SeededFaces faces = shown[0];
+        int[] position = new int[playerCount];
+        List<Integer> orderList = new ArrayList<>(playerCount);
+        for (int p = 0; p < playerCount; p++) {
+            position[order[p]] = p;
+            orderList.add(order[p]);
+        }
+        List<PlayerRoll> rolls = new ArrayList<>(playerCount);
+        for (int d = 0; d < playerCount; d++) {
+            rolls.add(new PlayerRoll(d, DieNames.of(d), faces.faceIndex(d), faces.faceValue(d), position[d]));
+        }
+        return new RoundResult(round, orderList, rolls, dice.grade(), dice.id());
+    }
+
+    /** Returns round {@code round}'s order as player indices (through {@link FastOrders}). */
+    @Override
+    public int[] orderIndices(long round, int players) {
+        if (players < 1) {
+            throw new IllegalArgumentException("player count must be >= 1, got " + players);
+        }
+        int[] out = new int[players];
+        fastOrders().orderInto(round, players, out);
+        return out;
+    }
+
+    /** Returns a new allocation-free orderer with this session's orders (one per thread). */
+    public FastOrders fastOrders() {
+        return new FastOrders(this);
+    }
+}

@@ -1,0 +1,112 @@
+package org.precedence.runtime.provider;
+
+import org.precedence.api.RankingConvention;
+import org.precedence.runtime.dice.ExplicitDice;
+import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.randomness.BoundedSampler;
+import org.precedence.runtime.randomness.RollGenerator;
+
+/**
+ * A session's orders without allocation, for simulations: {@link #orderInto} gives exactly the
+ * order of {@link DiceSession#roll} (tested), skipping the faces and result objects.
+ *
+ * <p>For explicit sets the roll is drawn directly: one generator block yields the attempt-0
+ * words of four players, each face is taken by Lemire's method on a {@code long}, and the
+ * players are insertion-sorted by face value; a rejected word (probability below
+ * sides/2^64) falls back to the general draw of the next attempts. Constructed sets take the
+ * general lazy path.
+ *
+ * <p>Not thread-safe: it owns scratch arrays. Create one per thread ({@link
+ * DiceSession#fastOrders()} is cheap).
+ */
+public final class FastOrders implements Ranker {
+    private final DiceSession session;
+    private final RollGenerator generator;
+    private final RankingConvention convention;
+    private final MixedRadixDice[] sets;
+    private final long[] block = new long[RollGenerator.LANES];
+    private long[] keys = new long[0];
+    private int[] scratch = new int[0];
+
+    FastOrders(DiceSession session) {
+        this.session = session;
+        this.generator = session.generator();
+        this.convention = session.spec().convention();
+        this.sets = new MixedRadixDice[session.maxPlayers() + 1];
+    }
+
+    /**
+     * Writes round {@code round}'s order for {@code players} players into {@code out[0..players)}.
+     *
+     * @throws IllegalArgumentException if {@code round < 0}, the count is not served, or
+     *                                  {@code out} is too short
+     */
+    public void orderInto(long round, int players, int[] out) {
+        Validation.requireRound(round);
+        if (out.length < players) {
+            throw new IllegalArgumentException("out has " + out.length + " slots for " + players + " players");
+        }
+        if (players == 1) {
+            out[0] = 0;
+            return;
+        }
+        Validation.requireServedCount(players, sets.length - 1);
+        if (scratch.length < players) {
+            scratch = new int[players];
+            keys = new long[players];
+        }
+        RuleOrders.orderInto(session.spec().rule(), round, players, this, out, scratch);
+    }
+
+    @Override
+    public void rankInto(int stream, long index, int players, int[] out) {
+        MixedRadixDice dice = sets[players];
+        if (dice == null) {
+            dice = session.setFor(players);
+            sets[players] = dice;
+        }
+        if (dice instanceof ExplicitDice explicit) {
+            rankExplicit(explicit, stream, index, players, out);
+        } else {
+            LazyRanker.rankInto(generator, dice, convention, stream, index, out);
+        }
+    }
+
+    private void rankExplicit(ExplicitDice dice, int stream, long index, int n, int[] out) {
+        long[] k = keys;
+        for (int g = 0; g < n; g += RollGenerator.LANES) {
+            generator.block(index, RollGenerator.groupWord(stream, g), 0, 0, block);
+            int end = Math.min(n, g + RollGenerator.LANES);
+            for (int d = g; d < end; d++) {
+                long sides = dice.sideCount(d);
+                long face = BoundedSampler.lemire64(block[d - g], sides);
+                if (face == BoundedSampler.REJECTED) {
+                    face = redraw(stream, index, d, sides);
+                }
+                k[d] = dice.value(d, (int) face);
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            long key = k[i];
+            int j = i - 1;
+            while (j >= 0 && k[out[j]] > key) {
+                out[j + 1] = out[j];
+                j--;
+            }
+            out[j + 1] = i;
+        }
+        if (convention == RankingConvention.HIGHEST_FIRST) {
+            RuleOrders.reverse(out, n);
+        }
+    }
+
+    /** Attempts 1, 2, … of digit 0: the same words the general sampler uses. */
+    private long redraw(int stream, long index, int die, long sides) {
+        for (long attempt = 1; ; attempt++) {
+            long face = BoundedSampler.lemire64(generator.word(index, stream, die, 0, attempt), sides);
+            if (face != BoundedSampler.REJECTED) {
+                return face;
+            }
+        }
+    }
+}

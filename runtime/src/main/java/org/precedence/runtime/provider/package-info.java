@@ -1,0 +1,13 @@
+/**
+ * The turn-order provider engines discover with {@link java.util.ServiceLoader}: {@link
+ * org.precedence.runtime.provider.FairDiceProvider} opens {@link
+ * org.precedence.runtime.provider.DiceSession}s, which roll order-fair dice served by a {@link
+ * org.precedence.runtime.source.SetSource} with counter-based randomness, and turn the rolls
+ * into turn orders by the session's {@link org.precedence.api.OrderRule}.
+ *
+ * <p>Promises: every round is a pure function of (spec, round, player count); a round with n
+ * players rolls the served order-fair set for n, whatever was played before (players may join
+ * or leave between rounds); {@link org.precedence.runtime.provider.FastOrders} gives the same
+ * orders as the sessions without allocating, for simulations.
+ */
+package org.precedence.runtime.provider;

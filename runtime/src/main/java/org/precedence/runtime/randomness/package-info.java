@@ -1,0 +1,14 @@
+/**
+ * Counter-based randomness for rolls: every 64-bit word is a pure function of (session seed,
+ * draw index, stream, player, digit, attempt), so any round is computed directly, at the same
+ * cost, identically on every thread and in every evaluation order.
+ *
+ * <p>{@link org.precedence.runtime.randomness.RollGenerator} turns a counter into four words
+ * (fast mode: Philox4x64-10 from Apache Commons RNG; secure mode: HMAC-SHA256 from the JDK);
+ * {@link org.precedence.runtime.randomness.BoundedSampler} turns words into exactly uniform
+ * digits by rejection; {@link org.precedence.runtime.randomness.SeededFaces} memoises each
+ * player's digits so that {@link org.precedence.runtime.dice.MixedRadixDice#compare} can pull
+ * them lazily. The exact layouts are written down in {@code docs/roll-spec.md}; the committed
+ * golden vectors pin them, and they never change without a new algorithm id.
+ */
+package org.precedence.runtime.randomness;

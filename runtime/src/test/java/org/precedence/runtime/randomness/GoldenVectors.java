@@ -1,0 +1,176 @@
+package org.precedence.runtime.randomness;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+import java.io.IOException;
+import java.math.BigInteger;
+import java.nio.file.Path;
+import java.util.HexFormat;
+import java.util.List;
+import org.precedence.api.FairnessGrade;
+import org.precedence.api.OrderRule;
+import org.precedence.api.PlayerRoll;
+import org.precedence.api.RandomnessMode;
+import org.precedence.api.RankingConvention;
+import org.precedence.api.RoundResult;
+import org.precedence.api.SessionSeed;
+import org.precedence.api.SessionSpec;
+import org.precedence.runtime.dice.ExplicitDice;
+import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.dice.Word;
+import org.precedence.runtime.provider.DiceSession;
+import org.precedence.runtime.provider.TestSets;
+import org.precedence.runtime.replay.SessionLogFiles;
+import org.precedence.runtime.source.SetSource;
+
+/**
+ * Computes the golden vectors. Run once to create the committed file (never to "fix" it: the
+ * committed vectors are a promise, and changing them needs a new algorithm id):
+ * {@code java -cp ... org.precedence.runtime.randomness.GoldenVectors runtime/src/test/resources/.../golden-vectors.json}.
+ */
+public final class GoldenVectors {
+    static final String RESOURCE = "golden-vectors.json";
+    static final HexFormat HEX = HexFormat.of();
+    static final List<SessionSeed> SEEDS = List.of(SessionSeed.fromText("golden vectors one"),
+            SessionSeed.fromHex("000102030405060708090a0b0c0d0e0f101112131415161718191a1b1c1d1e1f"));
+    static final long[] ROUNDS = {0, 1, 2, 3, 4, 5, 7, 1_000_000_000L, 1L << 62};
+    static final long[][] COUNTERS = {{0, 0, 0, 0}, {1, 0, 0, 0}, {1_000_000_000L, (1L << 32) | 2, 1, 3},
+        {-1, -1, -1, -1}};
+    static final BigInteger[] RADICES = {BigInteger.valueOf(6), BigInteger.valueOf(1152),
+        BigInteger.ONE.shiftLeft(62).add(BigInteger.valueOf(3)), BigInteger.ONE.shiftLeft(100).add(BigInteger.ONE)};
+
+    private GoldenVectors() {
+    }
+
+    static SetSource single(MixedRadixDice dice) {
+        return new SetSource() {
+            @Override
+            public MixedRadixDice forPlayers(int players, FairnessGrade grade) {
+                if (players != dice.players()) {
+                    throw new IllegalArgumentException("this source serves " + dice.players() + " players");
+                }
+                return dice;
+            }
+
+            @Override
+            public int maxPlayers() {
+                return dice.players();
+            }
+        };
+    }
+
+    static ExplicitDice diceOf(String id, String word) {
+        return new ExplicitDice(id, Word.parse(word).toDiceSet(), FairnessGrade.ORDER_FAIR, Word.parse(word).players());
+    }
+
+    static JsonObject roll(RandomnessMode mode, SessionSeed seed, String setId, String word, OrderRule rule,
+            RankingConvention convention, long round) {
+        ExplicitDice dice = diceOf(setId, word);
+        DiceSession s = DiceSession.open(new SessionSpec(seed, mode, rule, convention), single(dice));
+        RoundResult r = s.roll(round, dice.players());
+        JsonObject o = new JsonObject();
+        o.addProperty("algorithm", RollGenerator.algorithmId(mode));
+        o.addProperty("seed", seed.toHex());
+        o.addProperty("set", setId);
+        o.addProperty("rule", rule.name());
+        o.addProperty("convention", convention.name());
+        o.addProperty("round", round);
+        JsonArray faceIndices = new JsonArray();
+        JsonArray faces = new JsonArray();
+        for (PlayerRoll p : r.rolls()) {
+            faceIndices.add(p.faceIndex().toString());
+            faces.add(p.faceValue().toString());
+        }
+        o.add("faceIndices", faceIndices);
+        o.add("faces", faces);
+        JsonArray order = new JsonArray();
+        r.order().forEach(order::add);
+        o.add("order", order);
+        return o;
+    }
+
+    static JsonObject generate() {
+        JsonObject root = new JsonObject();
+        root.addProperty("about", "Precedence roll golden vectors: our own, computed by the reference implementation."
+                + " They never change without a new algorithm id. See docs/roll-spec.md.");
+        JsonObject sets = new JsonObject();
+        sets.addProperty("test-2x2", ((ExplicitDice) TestSets.INSTANCE.forPlayers(2)).set().word().toString());
+        sets.addProperty("test-3x6", ((ExplicitDice) TestSets.INSTANCE.forPlayers(3)).set().word().toString());
+        sets.addProperty("test-4x1152", ((ExplicitDice) TestSets.INSTANCE.forPlayers(4)).set().word().toString());
+        root.add("sets", sets);
+
+        JsonArray keys = new JsonArray();
+        JsonArray blocks = new JsonArray();
+        JsonArray digits = new JsonArray();
+        JsonArray rolls = new JsonArray();
+        for (SessionSeed seed : SEEDS) {
+            JsonObject k = new JsonObject();
+            k.addProperty("seed", seed.toHex());
+            k.addProperty("commitment", seed.commitment());
+            k.addProperty("fastKey", HEX.formatHex(RollGenerator.deriveKey(RollGenerator.FAST_ID, seed)));
+            k.addProperty("secureKey", HEX.formatHex(RollGenerator.deriveKey(RollGenerator.SECURE_ID, seed)));
+            keys.add(k);
+            for (RandomnessMode mode : RandomnessMode.values()) {
+                RollGenerator g = RollGenerator.of(mode, seed);
+                for (long[] c : COUNTERS) {
+                    long[] out = new long[4];
+                    g.block(c[0], c[1], c[2], c[3], out);
+                    JsonObject b = new JsonObject();
+                    b.addProperty("algorithm", g.algorithmId());
+                    b.addProperty("seed", seed.toHex());
+                    b.add("counter", hexWords(c));
+                    b.add("words", hexWords(out));
+                    blocks.add(b);
+                }
+                for (BigInteger radix : RADICES) {
+                    for (int player = 0; player < 6; player += 5) {
+                        final int p = player;
+                        JsonObject d = new JsonObject();
+                        d.addProperty("algorithm", g.algorithmId());
+                        d.addProperty("seed", seed.toHex());
+                        d.addProperty("index", 9);
+                        d.addProperty("stream", 1);
+                        d.addProperty("player", p);
+                        d.addProperty("digit", 2);
+                        d.addProperty("radix", radix.toString());
+                        d.addProperty("value", BoundedSampler.draw(radix, a -> g.word(9, 1, p, 2, a)).toString());
+                        digits.add(d);
+                    }
+                }
+                for (String setId : new String[] {"test-2x2", "test-3x6", "test-4x1152"}) {
+                    String word = sets.get(setId).getAsString();
+                    for (OrderRule rule : OrderRule.values()) {
+                        for (RankingConvention convention : RankingConvention.values()) {
+                            boolean full = setId.equals("test-3x6") || rule == OrderRule.FRESH_EACH_ROUND;
+                            if (!full && convention == RankingConvention.HIGHEST_FIRST) {
+                                continue;
+                            }
+                            for (long round : ROUNDS) {
+                                rolls.add(roll(mode, seed, setId, word, rule, convention, round));
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        root.add("keys", keys);
+        root.add("blocks", blocks);
+        root.add("digits", digits);
+        root.add("rolls", rolls);
+        return root;
+    }
+
+    static JsonArray hexWords(long[] words) {
+        JsonArray a = new JsonArray();
+        for (long w : words) {
+            a.add(String.format("%016x", w));
+        }
+        return a;
+    }
+
+    public static void main(String[] args) throws IOException {
+        String text = new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(generate()) + "\n";
+        SessionLogFiles.writeAtomically(Path.of(args[0]), text);
+    }
+}

@@ -1,0 +1,102 @@
+package org.precedence.runtime.randomness;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.google.gson.JsonArray;
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.math.BigInteger;
+import java.nio.charset.StandardCharsets;
+import org.junit.jupiter.api.Test;
+import org.precedence.api.OrderRule;
+import org.precedence.api.RankingConvention;
+import org.precedence.api.SessionSeed;
+
+/**
+ * The committed golden vectors, recomputed entry by entry: key derivation, raw blocks, sampled
+ * digits (including rejection-prone and multi-word radices) and whole rounds under every rule
+ * and convention. Passing on JDK 17 and JDK 25 shows the results do not depend on the JDK.
+ */
+class GoldenVectorsTest {
+
+    static JsonObject load() throws IOException {
+        try (InputStream in = GoldenVectorsTest.class.getResourceAsStream(GoldenVectors.RESOURCE)) {
+            assertTrue(in != null, "golden vectors are on the test class path");
+            return JsonParser.parseReader(new InputStreamReader(in, StandardCharsets.UTF_8)).getAsJsonObject();
+        }
+    }
+
+    private static long[] words(JsonArray a) {
+        long[] w = new long[a.size()];
+        for (int i = 0; i < w.length; i++) {
+            w[i] = Long.parseUnsignedLong(a.get(i).getAsString(), 16);
+        }
+        return w;
+    }
+
+    @Test
+    void keys_matchTheFile() throws IOException {
+        for (JsonElement e : load().getAsJsonArray("keys")) {
+            JsonObject k = e.getAsJsonObject();
+            SessionSeed seed = SessionSeed.fromHex(k.get("seed").getAsString());
+            assertEquals(k.get("commitment").getAsString(), seed.commitment());
+            assertEquals(k.get("fastKey").getAsString(),
+                    GoldenVectors.HEX.formatHex(RollGenerator.deriveKey(RollGenerator.FAST_ID, seed)));
+            assertEquals(k.get("secureKey").getAsString(),
+                    GoldenVectors.HEX.formatHex(RollGenerator.deriveKey(RollGenerator.SECURE_ID, seed)));
+        }
+    }
+
+    @Test
+    void blocksAndDigits_matchTheFile() throws IOException {
+        JsonObject file = load();
+        int n = 0;
+        for (JsonElement e : file.getAsJsonArray("blocks")) {
+            JsonObject b = e.getAsJsonObject();
+            RollGenerator g = RollGenerator.of(RollGenerator.modeOf(b.get("algorithm").getAsString()),
+                    SessionSeed.fromHex(b.get("seed").getAsString()));
+            long[] c = words(b.getAsJsonArray("counter"));
+            long[] out = new long[4];
+            g.block(c[0], c[1], c[2], c[3], out);
+            assertEquals(b.getAsJsonArray("words"), GoldenVectors.hexWords(out), b.toString());
+            n++;
+        }
+        for (JsonElement e : file.getAsJsonArray("digits")) {
+            JsonObject d = e.getAsJsonObject();
+            RollGenerator g = RollGenerator.of(RollGenerator.modeOf(d.get("algorithm").getAsString()),
+                    SessionSeed.fromHex(d.get("seed").getAsString()));
+            long index = d.get("index").getAsLong();
+            int stream = d.get("stream").getAsInt();
+            int player = d.get("player").getAsInt();
+            int digit = d.get("digit").getAsInt();
+            BigInteger value = BoundedSampler.draw(new BigInteger(d.get("radix").getAsString()),
+                    a -> g.word(index, stream, player, digit, a));
+            assertEquals(d.get("value").getAsString(), value.toString(), d.toString());
+            n++;
+        }
+        assertEquals(48, n);
+    }
+
+    @Test
+    void rolls_matchTheFile() throws IOException {
+        JsonObject file = load();
+        JsonObject sets = file.getAsJsonObject("sets");
+        int n = 0;
+        for (JsonElement e : file.getAsJsonArray("rolls")) {
+            JsonObject r = e.getAsJsonObject();
+            String setId = r.get("set").getAsString();
+            JsonObject again = GoldenVectors.roll(RollGenerator.modeOf(r.get("algorithm").getAsString()),
+                    SessionSeed.fromHex(r.get("seed").getAsString()), setId, sets.get(setId).getAsString(),
+                    OrderRule.valueOf(r.get("rule").getAsString()),
+                    RankingConvention.valueOf(r.get("convention").getAsString()), r.get("round").getAsLong());
+            assertEquals(r, again);
+            n++;
+        }
+        assertTrue(n > 500, "rolls checked: " + n);
+    }
+}
