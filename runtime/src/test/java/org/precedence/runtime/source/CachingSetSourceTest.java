@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -122,6 +123,16 @@ class CachingSetSourceTest {
         MixedRadixDice fair = source.forPlayers(4, FairnessGrade.ORDER_FAIR);
         assertInstanceOf(ConstructedDice.class, fair);
         assertEquals(4, fair.subsetDepth());
+    }
+
+    @Test
+    void withCatalog_overstatedCatalogDepth_isNotUsedAsStart() {
+        // ABCABC has depth 1 but claims 2 (and only lead-fairness): not a start, not served.
+        ExplicitDice liar = new ExplicitDice("liar-3", Word.parse("ABCABC").toDiceSet(), FairnessGrade.LEAD_FAIR, 2);
+        SetSource source = SetSources.withCatalog(n -> n == 3 ? Optional.of(liar) : Optional.empty());
+        MixedRadixDice three = source.forPlayers(3, FairnessGrade.ORDER_FAIR);
+        assertInstanceOf(ConstructedDice.class, three);
+        assertEquals(BigInteger.valueOf(6), three.sides(0));
     }
 
     @Test
