@@ -86,6 +86,26 @@ class CachingSetSourceTest {
     }
 
     @Test
+    void forPlayers_afterEviction_rebuildsTheSameSet() {
+        // SetSource promises the same set for the life of the process; eviction may drop the
+        // object, so the rebuilt one must be the same set (same canonical hash, same faces).
+        CachingSetSource source = new CachingSetSource(new CatalogFirstBuilder(n -> Optional.empty()), 64, 1);
+        MixedRadixDice first = source.forPlayers(5);
+        for (int n = 6; n <= 9; n++) {
+            source.forPlayers(n);
+        }
+        source.cachedSets();
+        MixedRadixDice again = source.forPlayers(5);
+        assertEquals(first.sha256(), again.sha256());
+        assertEquals(first.id(), again.id());
+        BigInteger[] digits = new BigInteger[first.digits()];
+        for (int j = 0; j < digits.length; j++) {
+            digits[j] = first.radix(0, j).subtract(BigInteger.ONE);
+        }
+        assertEquals(first.faceValue(2, digits), again.faceValue(2, digits));
+    }
+
+    @Test
     void forPlayers_badInput_namesTheSupportedRange() {
         CountingBuilder builder = new CountingBuilder();
         CachingSetSource source = new CachingSetSource(builder, 64, 4);
