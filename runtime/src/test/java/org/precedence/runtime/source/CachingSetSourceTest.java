@@ -159,7 +159,8 @@ class CachingSetSourceTest {
     void standard_servesSixtyFourPlayers() {
         MixedRadixDice big = SetSources.standard().forPlayers(64);
         assertEquals(64, big.players());
-        assertEquals(63, big.digits());
+        assertEquals(org.precedence.runtime.construction.Construction.smallest(64).levels().size(), big.digits());
+        assertEquals(64, big.subsetDepth());
     }
 
     private static Word materialisedThree() {
