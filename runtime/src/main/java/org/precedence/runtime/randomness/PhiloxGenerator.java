@@ -10,7 +10,9 @@ import org.apache.commons.rng.core.source64.Philox4x64;
  * jump to an arbitrary counter (there is no public counter setter, and {@code jump(double)}
  * also allocates a copy), so each block constructs one generator seeded with the wanted
  * counter minus one (a 256-bit decrement) and reads its first four words. Neither the seed
- * array nor the generator escapes, so the JIT can usually scalar-replace both.
+ * array nor the generator escapes, so the JIT scalar-replaces both (JMH shows no allocation);
+ * this measured cheaper than keeping one generator and stepping it to the next counter,
+ * whose state then lives on the heap ({@code PhiloxBench}).
  */
 final class PhiloxGenerator extends RollGenerator {
     private final long key0;
