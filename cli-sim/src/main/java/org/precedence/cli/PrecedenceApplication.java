@@ -16,6 +16,12 @@ import picocli.CommandLine.HelpCommand;
             HelpCommand.class,
             RollCommand.class,
             ReplayCommand.class,
+            SetCommand.class,
+            PlayCommand.class,
+            ServeCommand.class,
+            org.precedence.cli.simulate.SimulateCommand.class,
+            org.precedence.cli.export.ExportCommand.class,
+            VerifyCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 
@@ -32,9 +38,16 @@ public final class PrecedenceApplication implements Callable<Integer> {
 
     /** Builds the command line with the shared error handling; tests call this too. */
     public static CommandLine commandLine() {
+        return configure(new CommandLine(new PrecedenceApplication()));
+    }
+
+    /**
+     * Applies the shared error handling and parsing settings to {@code cmd}; tests use it to run
+     * one subcommand built with test collaborators exactly as the application would.
+     */
+    public static CommandLine configure(CommandLine cmd) {
         ErrorMapper errors = new ErrorMapper();
-        return new CommandLine(new PrecedenceApplication())
-                .setParameterExceptionHandler(errors)
+        return cmd.setParameterExceptionHandler(errors)
                 .setExecutionExceptionHandler(errors)
                 .setCaseInsensitiveEnumValuesAllowed(true);
     }

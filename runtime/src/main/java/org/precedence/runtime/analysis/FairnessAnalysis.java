@@ -38,7 +38,12 @@ public final class FairnessAnalysis {
      * @throws IllegalArgumentException if the word has more than {@link PatternTable#MAX_PLAYERS} dice
      */
     public static FairnessReport analyse(Word word, RankingConvention convention) {
-        PatternTable table = PatternTable.count(word);
+        return analyse(word, convention, false);
+    }
+
+    /** As {@link #analyse(Word, RankingConvention)}; {@code forceBig} takes the BigInteger path (tests). */
+    static FairnessReport analyse(Word word, RankingConvention convention, boolean forceBig) {
+        PatternTable table = PatternTable.count(word, forceBig);
         int n = word.players();
         int[] sides = word.sides();
         BigInteger outcomes = PatternTable.productOfSides(word);

@@ -97,8 +97,12 @@ public final class DiceSet {
     /**
      * Names must be non-blank, at most {@link #MAX_NAME_LENGTH} characters, without leading or
      * trailing white space and without control characters, so they print on one line.
+     *
+     * @param d    index of the die (for the message)
+     * @param name the proposed name
+     * @throws InvalidDiceSetException saying what is wrong with the name
      */
-    private static void checkName(int d, String name) {
+    public static void checkName(int d, String name) {
         String die = "die " + DieNames.of(d);
         if (name == null || name.isBlank()) {
             throw new InvalidDiceSetException(die + " has a blank name");

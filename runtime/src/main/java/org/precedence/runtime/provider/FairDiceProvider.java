@@ -28,7 +28,7 @@ public final class FairDiceProvider implements TurnOrderProvider {
         return DefaultSets.get();
     }
 
-    /** Returns the sets this provider serves. */
+    /** Returns the sets this provider rolls (so a service can describe exactly those). */
     public SetSource sets() {
         return sets;
     }

@@ -64,6 +64,7 @@ class FairnessAnalysisTest {
         // (from the entry's comments as summarised in our brief). Exhaustive search here.
         List<Word> fair = OrderFairSearch.find(2, 4, 6);
         assertFalse(fair.isEmpty());
+        System.out.println("order-fair 2/4/6: " + fair.size() + " words, first " + fair.get(0));
         int before = FairnessChecks.ORDER_FAIR_SETS_CHECKED.get();
         for (Word w : fair) {
             FairnessReport r = FairnessChecks.assertExact(w.toDiceSet());
@@ -91,6 +92,8 @@ class FairnessAnalysisTest {
             orbitRepresentatives.add(Symmetry.canonical(w, true));
         }
         assertEquals(6, orbitRepresentatives.size());
+        orbitRepresentatives.stream().map(Word::toString).sorted()
+                .forEach(w -> System.out.println("order-fair 3 x 6: " + w));
         for (Word w : orbitRepresentatives) {
             FairnessReport r = FairnessChecks.assertExact(w.toDiceSet());
             assertTrue(r.orderFair());
@@ -162,6 +165,33 @@ class FairnessAnalysisTest {
         assertEquals(r.outcomes(), sum);
         assertGradesNest(r);
         assertTrue(r.minCount().compareTo(r.maxCount()) < 0);
+    }
+
+    @Test
+    void analyse_bigIntegerPath_givesTheSameReport() {
+        SplittableRandom rnd = new SplittableRandom(TestSets.seed("FairnessAnalysisTest.big"));
+        List<Word> words = new java.util.ArrayList<>(OrderFairSearch.find(2, 4, 6));
+        for (int trial = 0; trial < 80; trial++) {
+            int n = 2 + rnd.nextInt(5);
+            words.add(TestSets.randomSet(rnd, TestSets.randomSides(rnd, n, trial % 2 == 0, 50_000)).word());
+        }
+        for (Word w : words) {
+            for (RankingConvention c : RankingConvention.values()) {
+                FairnessReport plain = FairnessAnalysis.analyse(w, c, false);
+                FairnessReport big = FairnessAnalysis.analyse(w, c, true);
+                assertEquals(plain.orderCounts(), big.orderCounts(), w.toString());
+                assertEquals(java.util.Arrays.deepToString(plain.seatCounts()),
+                        java.util.Arrays.deepToString(big.seatCounts()));
+                assertEquals(plain.orderFair(), big.orderFair());
+                assertEquals(plain.seatFair(), big.seatFair());
+                assertEquals(plain.leadFair(), big.leadFair());
+                assertEquals(plain.subsetDepth(), big.subsetDepth());
+                assertEquals(plain.minCount(), big.minCount());
+                assertEquals(plain.maxCount(), big.maxCount());
+                assertEquals(plain.worstRanking(), big.worstRanking());
+                assertEquals(0, plain.totalVariation().compareTo(big.totalVariation()));
+            }
+        }
     }
 
     /** order-fair ⇒ seat-fair ⇒ lead-fair, on every report the tests see. */

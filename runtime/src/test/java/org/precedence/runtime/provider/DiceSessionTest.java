@@ -112,7 +112,7 @@ class DiceSessionTest {
     @Test
     void fastOrders_constructedSetsTakeTheLazyPathWithSameOrders() {
         TwoLevelDice dice = new TwoLevelDice(TestSets.searchThreeSixSided().reversed().reversed(),
-                BuiltInSets.permutations(3));
+                RelabelingSets.permutations(3));
         SetSource source = new SetSource() {
             @Override
             public MixedRadixDice forPlayers(int players, FairnessGrade grade) {

@@ -1,0 +1,27 @@
+package org.precedence.cli.simulate;
+
+import java.util.Locale;
+
+/** One plain-words sentence per test result, the same in the text report and in the plot. */
+final class Verdict {
+    private Verdict() {
+    }
+
+    /** Says what the main p-value means for a player. */
+    static String of(SupplyResult r) {
+        double p = r.main().pValue();
+        String what = r.rankingsCounted() ? "turn orders" : "seats";
+        if (p < SimulationReport.FLAG_BELOW) {
+            return String.format(Locale.ROOT, "Clearly uneven: %,d rounds show some %s coming up more "
+                    + "often than others, far beyond what luck explains (p = %s). These dice are not fair.",
+                    r.rounds(), what, Format.p(p));
+        }
+        if (p < 0.01) {
+            return String.format(Locale.ROOT, "Unusually uneven (p = %s): luck alone gives counts this far "
+                    + "apart about %s in a hundred runs. Worth a longer run with another seed.",
+                    Format.p(p), Format.chance(p));
+        }
+        return String.format(Locale.ROOT, "Nothing suspicious: %,d rounds came out as evenly as fair dice "
+                + "do (p = %s; only a p below 0.000001 would flag these dice).", r.rounds(), Format.p(p));
+    }
+}

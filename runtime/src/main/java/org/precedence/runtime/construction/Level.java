@@ -1,0 +1,163 @@
+package org.precedence.runtime.construction;
+
+import java.math.BigInteger;
+import java.util.Objects;
+
+/**
+ * One level of the construction: the previous word W is written once per block, block b being
+ * W relabelled by member b of a {@link PermutationFamily}, or — for reversal doubling — W
+ * followed by W read backwards. A level multiplies the side count by {@link #blocks()} and
+ * lifts the subset depth to {@link #liftsTo()}.
+ */
+public final class Level {
+    private final PermutationFamily family;
+    private final int points;
+    private final int liftsTo;
+    /** Word-specific levels: the blocks listed one by one, with their reversal flags. */
+    private final int[][] listed;
+    private final boolean[] listedReversed;
+    private final String listedName;
+
+    private Level(PermutationFamily family, int points, int liftsTo) {
+        this.family = family;
+        this.points = points;
+        this.liftsTo = liftsTo;
+        this.listed = null;
+        this.listedReversed = null;
+        this.listedName = null;
+    }
+
+    private Level(String name, int points, int liftsTo, int[][] listed, boolean[] reversed) {
+        this.family = null;
+        this.points = points;
+        this.liftsTo = liftsTo;
+        this.listed = listed;
+        this.listedReversed = reversed;
+        this.listedName = name;
+    }
+
+    /**
+     * A level whose blocks are listed (relabelling, and whether the block is read backwards),
+     * chosen for one particular previous word rather than uniform on tuples. It lifts the depth
+     * only for that word, so a construction using it is served only after its exact counts have
+     * been composed and checked ({@link ConstructedDice} does this).
+     */
+    public static Level wordSpecific(String name, int[][] relabellings, boolean[] reversed, int liftsTo) {
+        if (relabellings.length == 0 || relabellings.length != reversed.length) {
+            throw new IllegalArgumentException("a listed level needs as many reversal flags as blocks (at least one)");
+        }
+        int n = relabellings[0].length;
+        int[][] copy = new int[relabellings.length][];
+        for (int b = 0; b < copy.length; b++) {
+            copy[b] = relabellings[b].clone();
+            if (copy[b].length != n) {
+                throw new IllegalArgumentException("block " + b + " relabels " + copy[b].length + " letters, not " + n);
+            }
+            FamilySamples.requirePermutation(copy[b], name);
+        }
+        return new Level(name, n, liftsTo, copy, reversed.clone());
+    }
+
+    /** Returns whether this level is valid only for its particular previous word. */
+    public boolean isWordSpecific() {
+        return listed != null;
+    }
+
+    /**
+     * A level relabelling by every member of {@code family}, lifting depth {@code liftsTo − 1}
+     * to {@code liftsTo}; the family must be uniform on ordered {@code liftsTo}-tuples.
+     */
+    public static Level relabelling(PermutationFamily family, int liftsTo) {
+        Objects.requireNonNull(family, "family");
+        if (liftsTo < 2 || liftsTo > family.uniformTuples()) {
+            throw new IllegalArgumentException(family.name() + " is uniform on tuples up to length "
+                    + family.uniformTuples() + ", so it cannot lift depth to " + liftsTo);
+        }
+        return new Level(family, family.points(), liftsTo);
+    }
+
+    /** Reversal doubling: W then W backwards, lifting depth 1 to 2 for equal side counts. */
+    public static Level reversal(int points) {
+        return new Level(null, points, 2);
+    }
+
+    /** Returns the family name, or {@code reversal}. */
+    public String name() {
+        if (listed != null) {
+            return listedName;
+        }
+        return family == null ? "reversal" : family.name();
+    }
+
+    /** Returns the number of blocks (the factor on the side count). */
+    public BigInteger blocks() {
+        if (listed != null) {
+            return BigInteger.valueOf(listed.length);
+        }
+        return family == null ? BigInteger.TWO : family.order();
+    }
+
+    /** Returns the subset depth after this level. */
+    public int liftsTo() {
+        return liftsTo;
+    }
+
+    /** Returns the number of dice. */
+    public int points() {
+        return points;
+    }
+
+    /** Returns whether this is reversal doubling. */
+    public boolean isReversal() {
+        return family == null && listed == null;
+    }
+
+    /** Returns the family, or null for reversal doubling. */
+    public PermutationFamily family() {
+        return family;
+    }
+
+    /** Returns whether block {@code block} is written backwards. */
+    boolean reversed(BigInteger block) {
+        if (listed != null) {
+            return listedReversed[block.intValueExact()];
+        }
+        return family == null && block.signum() != 0;
+    }
+
+    /**
+     * Writes block {@code block}'s relabelling into {@code out} (out[x] = new letter of x), or
+     * returns false when the block keeps the letters.
+     */
+    boolean relabel(BigInteger block, int[] out) {
+        if (listed != null) {
+            System.arraycopy(listed[block.intValueExact()], 0, out, 0, points);
+            return true;
+        }
+        if (family == null) {
+            return false;
+        }
+        family.member(block, out);
+        return true;
+    }
+
+    /** Returns (once per family) what was checked about this level's relabellings. */
+    public FamilyProof proof() {
+        if (listed != null) {
+            return new FamilyProof(listedName, points, blocks(), 0,
+                    "listed for its previous word only; valid because the exact composed counts of the"
+                            + " word after this level have subset depth " + liftsTo);
+        }
+        if (family == null) {
+            return new FamilyProof("reversal", points, BigInteger.TWO, 2,
+                    "a word with m faces per die followed by its reverse holds each ordered pair xy"
+                            + " N(xy) + N(yx) + m² = 2m² times, since N(xy) + N(yx) = m²");
+        }
+        return Families.proofOf(family);
+    }
+
+    @Override
+    public String toString() {
+        return name() + "→" + liftsTo;
+    }
+}

@@ -1,0 +1,45 @@
+package org.precedence.runtime.source;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Function;
+import java.util.function.IntFunction;
+import org.precedence.runtime.construction.ConstructedDice;
+import org.precedence.runtime.construction.Construction;
+import org.precedence.runtime.construction.StartingWord;
+import org.precedence.runtime.dice.ExplicitDice;
+import org.precedence.runtime.dice.MixedRadixDice;
+
+/**
+ * Builds the set for one key: the catalog's set when it is for the right number of players and
+ * its proven grade is high enough; otherwise the smallest construction, started from the
+ * catalog's set when that is an explicit set with equal sides and a proven depth of at least 2
+ * and it makes the result smaller.
+ */
+final class CatalogFirstBuilder implements Function<SetKey, MixedRadixDice> {
+    private final IntFunction<Optional<MixedRadixDice>> catalog;
+
+    CatalogFirstBuilder(IntFunction<Optional<MixedRadixDice>> catalog) {
+        this.catalog = catalog;
+    }
+
+    @Override
+    public MixedRadixDice apply(SetKey key) {
+        int n = key.players();
+        Optional<MixedRadixDice> listed = catalog.apply(n).filter(d -> d.players() == n);
+        if (listed.isPresent() && listed.get().grade().atLeast(key.grade())) {
+            return listed.get();
+        }
+        List<StartingWord> starts = listed.filter(CatalogFirstBuilder::canStart)
+                .map(d -> List.of(StartingWord.of(d)))
+                .orElse(List.of());
+        return new ConstructedDice(Construction.smallest(n, starts));
+    }
+
+    private static boolean canStart(MixedRadixDice d) {
+        if (!(d instanceof ExplicitDice explicit) || d.subsetDepth() < 2) {
+            return false;
+        }
+        return explicit.set().equalSides();
+    }
+}
