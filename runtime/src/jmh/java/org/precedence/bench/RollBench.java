@@ -48,6 +48,7 @@ public class RollBench {
     private final int[] out = new int[16];
     private final long[] faces = new long[16];
     private List<Integer> list4;
+    private List<Integer> list10;
     private Random random;
     private long round;
 
@@ -60,6 +61,7 @@ public class RollBench {
         secure = provider.open(new SessionSpec(seed, RandomnessMode.SECURE, OrderRule.FRESH_EACH_ROUND,
                 RankingConvention.LOWEST_FIRST)).fastOrders();
         list4 = new ArrayList<>(List.of(0, 1, 2, 3));
+        list10 = new ArrayList<>(List.of(0, 1, 2, 3, 4, 5, 6, 7, 8, 9));
         random = new Random(20261202L);
     }
 
@@ -103,6 +105,23 @@ public class RollBench {
         secure.orderInto(nextRound(), 4, out, faces);
         bh.consume(out);
         bh.consume(faces);
+    }
+
+    /** The peer for 10 players. */
+    @Benchmark
+    public List<Integer> shuffle10() {
+        Collections.shuffle(list10, random);
+        return list10;
+    }
+
+    /**
+     * Fast mode, 10 players: the construction's set (9 digits per face, about 3.7·10^47 sides),
+     * compared lazily digit by digit.
+     */
+    @Benchmark
+    public void fastConstructed10(Blackhole bh) {
+        fast.orderInto(nextRound(), 10, out);
+        bh.consume(out);
     }
 
     /** Round 1 and round 10^9 cost the same: counter-based, no stepping (rounds 1/2 vs 10^9/10^9+1). */

@@ -75,4 +75,22 @@ class ProviderDiscoveryTest {
             }
         }
     }
+
+    // The served 10-player set is constructed (too many faces to list): the fast path takes the
+    // lazy digit-by-digit comparison and must agree with the full roll, whose faces it orders.
+    @Test
+    void tenPlayers_constructedSetFastPathEqualsFullRoll() {
+        FairDiceProvider provider = new FairDiceProvider();
+        DiceSession s = provider.open(SessionSpec.of(SessionSeed.fromText("ten at the long table")));
+        FastOrders fast = s.fastOrders();
+        int[] out = new int[10];
+        for (long k = 0; k < 40; k++) {
+            fast.orderInto(k, 10, out);
+            var r = s.roll(k, 10);
+            assertEquals(r.order(), java.util.Arrays.stream(out).boxed().toList());
+            for (int p = 1; p < 10; p++) {
+                assertTrue(r.rolls().get(out[p - 1]).faceValue().compareTo(r.rolls().get(out[p]).faceValue()) < 0);
+            }
+        }
+    }
 }
