@@ -80,7 +80,8 @@ final class SearchCommand implements Callable<Integer> {
         String methodText;
         if (method == Method.structured) {
             result = structured(request);
-            methodText = "structured (renamed copies of searched sets; finds some, not all)";
+            methodText = "structured (joins of renamed copies of searched sets, and an added "
+                    + "die; finds some, not all)";
         } else {
             PrintWriter err = spec.commandLine().getErr();
             result = FairSetSearch.run(request.withProgress(line -> {
@@ -155,7 +156,15 @@ final class SearchCommand implements Callable<Integer> {
             return new SearchResult(s, request.depth(), true, java.math.BigInteger.ZERO, 0,
                     List.of(), violation.get(), 0, 0);
         }
-        List<Word> words = StructuredSearch.orderFairByRaising(s.length, s[0], request.timeLimit());
+        java.util.TreeMap<String, Word> found = new java.util.TreeMap<>();
+        for (Word w : StructuredSearch.orderFairByRaising(s.length, s[0], request.timeLimit())) {
+            found.put(w.toString(), w);
+        }
+        for (Word w : StructuredSearch.orderFairByJoiningAndAdding(s.length, s[0],
+                request.timeLimit())) {
+            found.put(w.toString(), w);
+        }
+        List<Word> words = List.copyOf(found.values());
         return new SearchResult(s, request.depth(), false, java.math.BigInteger.ZERO, words.size(),
                 words, "structured search finds some sets, not all",
                 (System.nanoTime() - start) / 1_000_000, 0);

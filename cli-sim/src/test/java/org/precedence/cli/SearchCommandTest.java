@@ -63,7 +63,7 @@ class SearchCommandTest {
     @Test
     void search_structuredFourDiceTwelveSides_findsSomeIncomplete() {
         JsonObject o = json(CliRun.of("search", "--players", "4", "--sides", "12",
-                "--method", "structured", "--format", "json"));
+                "--method", "structured", "--time-limit", "2", "--format", "json"));
         assertFalse(o.get("complete").getAsBoolean());
         assertFalse(o.has("solutions"));
         assertTrue(o.getAsJsonArray("words").size() > 0);

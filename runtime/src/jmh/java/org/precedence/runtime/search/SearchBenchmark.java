@@ -3,10 +3,12 @@ package org.precedence.runtime.search;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.Warmup;
 import org.precedence.api.RankingConvention;
 import org.precedence.runtime.analysis.FairnessAnalysis;
 import org.precedence.runtime.analysis.FairnessReport;
@@ -21,7 +23,9 @@ import org.precedence.runtime.dice.Word;
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@OutputTimeUnit(TimeUnit.MICROSECONDS)
+@Warmup(time = 2)
+@Measurement(time = 2)
 public class SearchBenchmark {
     private final Word threeBySix = Word.parse("ABCCBABACCABCABBAC");
 

@@ -104,6 +104,44 @@ public final class StructuredSearch {
     }
 
     /**
+     * Order-fair sets of {@code players} dice with {@code sides} sides each (sides even), made
+     * by joining two order-fair sets of one die fewer with half the sides — every pair of
+     * classes (found exhaustively), the second renamed in every way; such a join is order-fair
+     * because each part is — and adding the last die in every way that keeps the whole set
+     * order-fair. Finds some solutions, usually not all; with a time limit, stops between
+     * joins once it is reached and returns what it has.
+     */
+    public static List<Word> orderFairByJoiningAndAdding(int players, int sides, Duration limit) {
+        long deadline = limit == null ? Long.MAX_VALUE : System.nanoTime() + limit.toNanos();
+        if (sides % 2 != 0 || players < 3) {
+            return List.of();
+        }
+        int[] half = new int[players - 1];
+        Arrays.fill(half, sides / 2);
+        if (SideBounds.violation(half, players - 1).isPresent()) {
+            return List.of();
+        }
+        List<Word> parts = FairSetSearch.run(
+                new SearchRequest(half, players - 1, limit, 1, 0, null)).words();
+        int[][] renamings = new BalancedRelabeling(players - 1).permutations();
+        Map<String, Word> out = new java.util.TreeMap<>();
+        for (Word first : parts) {
+            for (Word second : parts) {
+                for (int[] renaming : renamings) {
+                    if (deadline != Long.MAX_VALUE && System.nanoTime() - deadline > 0) {
+                        return new ArrayList<>(out.values());
+                    }
+                    Word base = first.concat(second.relabel(renaming));
+                    for (Word w : addDie(base, sides, players)) {
+                        out.putIfAbsent(w.toString(), w);
+                    }
+                }
+            }
+        }
+        return new ArrayList<>(out.values());
+    }
+
+    /**
      * The five-dice recipe. Steps, each one searched exhaustively within its own space:
      * <ol>
      *   <li>every class of four 6-sided dice of depth 3 (every three of them order-fair);</li>

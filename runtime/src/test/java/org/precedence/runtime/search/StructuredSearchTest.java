@@ -50,6 +50,17 @@ class StructuredSearchTest {
     }
 
     @Test
+    void orderFairByJoiningAndAdding_fourDiceTwelveSides_findsOrderFairSets() {
+        List<Word> found = StructuredSearch.orderFairByJoiningAndAdding(4, 12,
+                java.time.Duration.ofSeconds(1));
+        assertFalse(found.isEmpty());
+        for (Word w : found) {
+            assertTrue(analyse(w).orderFair(), w::toString);
+            assertArrayEquals(new int[] {12, 12, 12, 12}, w.sides());
+        }
+    }
+
+    @Test
     void orderFairByRaising_fourDiceSixSides_findsNone() {
         // Consistent with the exhaustive proof that four 6-sided order-fair dice do not exist.
         assertTrue(StructuredSearch.orderFairByRaising(4, 6, null).isEmpty());
