@@ -123,7 +123,11 @@ class ConstructionTest {
             assertTrue(org.precedence.runtime.analysis.LowerBounds.equalSidesAllowed(n,
                     Construction.smallest(n).sidesPerDie().longValueExact()), "n=" + n);
         }
-        for (int n = 7; n <= 12; n++) {
+        // 7 dice: the F21 prefix replaces A7 (2520 blocks) by 21 blocks at depth 3.
+        assertEquals(big(2 * 21).multiply(big(2520).pow(2)).multiply(big(4 * 5040)), Construction.smallest(7).sidesPerDie());
+        assertEquals(big(5_377_010_688_000L), Construction.smallest(7).sidesPerDie());
+        assertEquals("reversal · F21' · A7 · A7 · mirror · S7 · reversal", Construction.smallest(7).method());
+        for (int n = 8; n <= 12; n++) {
             assertEquals(Construction.smallestUniform(n).sidesPerDie(), Construction.smallest(n).sidesPerDie());
         }
     }
