@@ -44,16 +44,47 @@ final class SearchedPlans {
      */
     static final int[] SEVEN_CONJUGATOR = {0, 1, 3, 5, 4, 6, 2};
 
+    /**
+     * Nine dice: AGL(1,9) conjugated by this permutation lifts ABCDEFGHI IHGFEDCBA to depth 3
+     * (72 blocks instead of PGL(2,8)'s 504). Found by sampling random relabellings (about one in
+     * ten works, 2059 of 20000 sampled).
+     */
+    static final int[] NINE_CONJUGATOR = {7, 6, 0, 4, 3, 2, 1, 8, 5};
+
     private SearchedPlans() {
     }
 
     /** Returns word-specific first levels after which the uniform construction continues. */
     static Optional<List<Level>> prefixFor(int n) {
-        if (n != 7) {
-            return Optional.empty();
+        if (n == 7) {
+            return Optional.of(List.of(Level.reversal(7),
+                    Level.wordSpecific("F21'", conjugatedFrobenius21(SEVEN_CONJUGATOR), new boolean[21], 3)));
         }
-        return Optional.of(List.of(Level.reversal(7),
-                Level.wordSpecific("F21'", conjugatedFrobenius21(SEVEN_CONJUGATOR), new boolean[21], 3)));
+        if (n == 9) {
+            return Optional.of(List.of(Level.reversal(9),
+                    Level.wordSpecific("AGL(1,9)'", conjugated(Families.affine(9), NINE_CONJUGATOR), new boolean[72], 3)));
+        }
+        return Optional.empty();
+    }
+
+    /** The members of π·F·π⁻¹, in order of their Lehmer rank. */
+    static int[][] conjugated(PermutationFamily family, int[] pi) {
+        int n = pi.length;
+        int[] inverse = new int[n];
+        for (int x = 0; x < n; x++) {
+            inverse[pi[x]] = x;
+        }
+        java.util.TreeMap<BigInteger, int[]> members = new java.util.TreeMap<>();
+        int[] h = new int[n];
+        for (BigInteger i = BigInteger.ZERO; i.compareTo(family.order()) < 0; i = i.add(BigInteger.ONE)) {
+            family.member(i, h);
+            int[] g = new int[n];
+            for (int x = 0; x < n; x++) {
+                g[x] = pi[h[inverse[x]]];
+            }
+            members.put(Lehmer.rank(g), g);
+        }
+        return members.values().toArray(new int[0][]);
     }
 
     /** The 21 members of π·F21·π⁻¹, in order of their Lehmer rank. */

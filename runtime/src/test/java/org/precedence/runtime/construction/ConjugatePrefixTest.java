@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.precedence.runtime.analysis.PatternTable;
 import org.precedence.runtime.dice.Word;
 
-class SevenDicePrefixTest {
+class ConjugatePrefixTest {
 
     @Test
     void conjugateSearch_rederivesTheShippedConjugator() {
@@ -26,7 +26,7 @@ class SevenDicePrefixTest {
         int working = 0;
         int[] first = null;
         for (int[] pi : all) {
-            if (lifts(table, SearchedPlans.conjugatedFrobenius21(pi))) {
+            if (lifts(table, 7, SearchedPlans.conjugatedFrobenius21(pi))) {
                 working++;
                 if (first == null) {
                     first = pi;
@@ -36,7 +36,19 @@ class SevenDicePrefixTest {
         assertEquals(672, working);
         assertArrayEquals(SearchedPlans.SEVEN_CONJUGATOR, first);
         // The unconjugated group does not work: the choice of labelling matters.
-        assertTrue(!lifts(table, SearchedPlans.conjugatedFrobenius21(new int[] {0, 1, 2, 3, 4, 5, 6})));
+        assertTrue(!lifts(table, 7, SearchedPlans.conjugatedFrobenius21(new int[] {0, 1, 2, 3, 4, 5, 6})));
+    }
+
+    @Test
+    void nineDice_conjugatedAffineGroupLiftsToDepthThree() {
+        PatternTable table = PatternTable.count(Word.parse("ABCDEFGHIIHGFEDCBA"));
+        int[][] members = SearchedPlans.conjugated(Families.affine(9), SearchedPlans.NINE_CONJUGATOR);
+        assertEquals(72, members.length);
+        assertTrue(lifts(table, 9, members));
+        Construction c = Construction.smallest(9);
+        assertEquals("reversal · AGL(1,9)' · A9 · A9 · A9 · A9 · mirror · S9 · reversal", c.method());
+        assertArrayEquals(new int[] {2, 3}, ComposedCounts.of(c, 2, 3).depthAfterLevel());
+        assertEquals(9, new ConstructedDice(c).subsetDepth());
     }
 
     @Test
@@ -49,18 +61,19 @@ class SevenDicePrefixTest {
         assertArrayEquals(new int[] {2, 3, 4}, depths);
     }
 
-    private static boolean lifts(PatternTable table, int[][] members) {
+    /** The lifting condition, computed directly: Σ_g N(g⁻¹w) equal over all ordered triples w. */
+    private static boolean lifts(PatternTable table, int n, int[][] members) {
         BigInteger first = null;
-        int[] inverse = new int[7];
-        for (int a = 0; a < 7; a++) {
-            for (int b = 0; b < 7; b++) {
-                for (int c = 0; c < 7; c++) {
+        int[] inverse = new int[n];
+        for (int a = 0; a < n; a++) {
+            for (int b = 0; b < n; b++) {
+                for (int c = 0; c < n; c++) {
                     if (a == b || b == c || a == c) {
                         continue;
                     }
                     BigInteger sum = BigInteger.ZERO;
                     for (int[] g : members) {
-                        for (int x = 0; x < 7; x++) {
+                        for (int x = 0; x < n; x++) {
                             inverse[g[x]] = x;
                         }
                         sum = sum.add(table.countOf(inverse[a], inverse[b], inverse[c]));
