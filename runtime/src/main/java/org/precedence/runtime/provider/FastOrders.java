@@ -1,5 +1,6 @@
 package org.precedence.runtime.provider;
 
+import org.precedence.api.OrderRule;
 import org.precedence.api.RankingConvention;
 import org.precedence.runtime.dice.ExplicitDice;
 import org.precedence.runtime.dice.MixedRadixDice;
@@ -20,9 +21,12 @@ import org.precedence.runtime.randomness.RollGenerator;
  * DiceSession#fastOrders()} is cheap).
  */
 public final class FastOrders implements Ranker {
+    /** Up to this many players, ranks are counted (O(n²), branch-free); above, insertion sort. */
+    private static final int RANK_BY_COUNTING = 16;
     private final DiceSession session;
     private final RollGenerator generator;
     private final RankingConvention convention;
+    private final OrderRule rule;
     private final MixedRadixDice[] sets;
     private final long[] block = new long[RollGenerator.LANES];
     private long[] keys = new long[0];
@@ -32,6 +36,7 @@ public final class FastOrders implements Ranker {
         this.session = session;
         this.generator = session.generator();
         this.convention = session.spec().convention();
+        this.rule = session.spec().rule();
         this.sets = new MixedRadixDice[session.maxPlayers() + 1];
     }
 
@@ -55,7 +60,34 @@ public final class FastOrders implements Ranker {
             scratch = new int[players];
             keys = new long[players];
         }
-        RuleOrders.orderInto(session.spec().rule(), round, players, this, out, scratch);
+        if (rule == OrderRule.FRESH_EACH_ROUND) {
+            rankInto(Streams.ROUND, round, players, out);
+        } else {
+            RuleOrders.orderInto(rule, round, players, this, out, scratch);
+        }
+    }
+
+    /**
+     * Like {@link #orderInto(long, int, int[])}, and also writes the face values of the roll
+     * behind the order ({@code faces[i]} for player i, as in {@link DiceSession#roll}).
+     *
+     * @throws IllegalArgumentException as above, if {@code faces} is too short, or if the set
+     *                                  is not explicit (constructed faces need not fit a long)
+     */
+    public void orderInto(long round, int players, int[] out, long[] faces) {
+        if (faces.length < players) {
+            throw new IllegalArgumentException("faces has " + faces.length + " slots for " + players + " players");
+        }
+        orderInto(round, players, out);
+        if (players == 1) {
+            throw new IllegalArgumentException("a single player rolls no die");
+        }
+        if (!(sets[players] instanceof ExplicitDice)) {
+            throw new IllegalArgumentException("set " + sets[players].id()
+                    + " is constructed; its faces need DiceSession.roll");
+        }
+        // Every rule ranks the draw whose faces it reports last, so the keys hold exactly those.
+        System.arraycopy(keys, 0, faces, 0, players);
     }
 
     @Override
@@ -85,6 +117,21 @@ public final class FastOrders implements Ranker {
                 }
                 k[d] = dice.value(d, (int) face);
             }
+        }
+        if (n <= RANK_BY_COUNTING) {
+            // Branch-free: player i's place is the number of lower faces. Faces are distinct
+            // and below 2^62, so the sign of k[j] - k[i] is exact; random keys would make a
+            // comparison sort mispredict about every other branch.
+            boolean lowestFirst = convention == RankingConvention.LOWEST_FIRST;
+            for (int i = 0; i < n; i++) {
+                long key = k[i];
+                int lower = 0;
+                for (int j = 0; j < n; j++) {
+                    lower += (int) ((k[j] - key) >>> 63);
+                }
+                out[lowestFirst ? lower : n - 1 - lower] = i;
+            }
+            return;
         }
         for (int i = 0; i < n; i++) {
             long key = k[i];

@@ -5,6 +5,9 @@
  * org.precedence.runtime.source.SetSource} with counter-based randomness, and turn the rolls
  * into turn orders by the session's {@link org.precedence.api.OrderRule}.
  *
+ * <p>The default sets are {@link org.precedence.runtime.source.SetSources#standard()}, with every
+ * set of at most 65,536 faces rolled as its explicit list of faces (id suffix {@code /listed}).
+ *
  * <p>Promises: every round is a pure function of (spec, round, player count); a round with n
  * players rolls the served order-fair set for n, whatever was played before (players may join
  * or leave between rounds); {@link org.precedence.runtime.provider.FastOrders} gives the same

@@ -89,11 +89,19 @@ class DiceSessionTest {
                         for (long k : farRounds) {
                             rounds.add(k);
                         }
+                        long[] faces = new long[4];
                         for (long k : rounds) {
                             fast.orderInto(k, n, out);
-                            int[] general = orderOf(s.roll(k, n));
+                            RoundResult r = s.roll(k, n);
+                            int[] general = orderOf(r);
                             assertArrayEquals(general, java.util.Arrays.copyOf(out, n),
                                     mode + " " + rule + " " + convention + " n=" + n + " round " + k);
+                            java.util.Arrays.fill(out, -1);
+                            fast.orderInto(k, n, out, faces);
+                            assertArrayEquals(general, java.util.Arrays.copyOf(out, n));
+                            for (int i = 0; i < n; i++) {
+                                assertEquals(r.rolls().get(i).faceValue().longValueExact(), faces[i]);
+                            }
                         }
                     }
                 }
@@ -104,7 +112,7 @@ class DiceSessionTest {
     @Test
     void fastOrders_constructedSetsTakeTheLazyPathWithSameOrders() {
         TwoLevelDice dice = new TwoLevelDice(TestSets.searchThreeSixSided().reversed().reversed(),
-                BuiltInSets.permutations(3));
+                RelabelingSets.permutations(3));
         SetSource source = new SetSource() {
             @Override
             public MixedRadixDice forPlayers(int players, FairnessGrade grade) {

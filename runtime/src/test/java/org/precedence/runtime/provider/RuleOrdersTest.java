@@ -18,7 +18,7 @@ class RuleOrdersTest {
 
     /** Counts round {@code round}'s orders over every combination of the draws it uses. */
     private static Map<String, Integer> orderCounts(OrderRule rule, long round, int n) {
-        List<int[]> perms = BuiltInSets.permutations(n);
+        List<int[]> perms = RelabelingSets.permutations(n);
         Map<String, Integer> counts = new HashMap<>();
         // The rule may use up to two draws (a block draw and a round draw): enumerate both.
         for (int[] blockDraw : perms) {
@@ -58,8 +58,8 @@ class RuleOrdersTest {
     @Test
     void balancedLead_blockLeadersAreAPermutationForEveryDraw() {
         int n = 4;
-        for (int[] blockDraw : BuiltInSets.permutations(n)) {
-            for (int[] roundDraw : BuiltInSets.permutations(n)) {
+        for (int[] blockDraw : RelabelingSets.permutations(n)) {
+            for (int[] roundDraw : RelabelingSets.permutations(n)) {
                 boolean[] led = new boolean[n];
                 for (int i = 0; i < n; i++) {
                     Ranker ranker = (stream, index, players, out) ->

@@ -28,13 +28,13 @@ public final class TestSets implements SetSource {
     private TestSets() {
         sets[2] = proven("test-2x2", DiceSet.ofInts(new int[] {1, 4}, new int[] {2, 3}).word());
         sets[3] = proven("test-3x6", searchThreeSixSided());
-        sets[4] = proven("test-4x" + BuiltInSets.word(4).length() / 4, BuiltInSets.word(4));
+        sets[4] = proven("test-4x" + RelabelingSets.word(4).length() / 4, RelabelingSets.word(4));
     }
 
     /** The first order-fair word (in search order) made of three relabeled copies of ABCCBA. */
     static Word searchThreeSixSided() {
         Word base = Word.parse("ABCCBA");
-        List<int[]> perms = BuiltInSets.permutations(3);
+        List<int[]> perms = RelabelingSets.permutations(3);
         for (int[] a : perms) {
             for (int[] b : perms) {
                 for (int[] c : perms) {

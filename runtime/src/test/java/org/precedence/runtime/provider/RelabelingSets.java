@@ -14,21 +14,21 @@ import org.precedence.runtime.dice.Word;
 import org.precedence.runtime.source.SetSource;
 
 /**
- * Order-fair sets for 2 to 4 players built here and proven before they are served: the word
- * "AB…" followed by its reverse has subset depth 2; each further level writes the word once
- * under every permutation of the letters, raising the depth by one, until depth n. Each set is
- * checked exactly with {@link FairnessAnalysis} before first use.
+ * Test sets for 2 to 4 players, built independently of the construction package and proven
+ * before they are served: the word "AB…" followed by its reverse has subset depth 2; each
+ * further level writes the word once under every permutation of the letters, raising the
+ * depth by one, until depth n. Each set is checked exactly with {@link FairnessAnalysis}.
  */
-final class BuiltInSets implements SetSource {
+final class RelabelingSets implements SetSource {
     static final int MAX_PLAYERS = 4;
     private final Map<Integer, MixedRadixDice> cache = new ConcurrentHashMap<>();
 
     @Override
     public MixedRadixDice forPlayers(int players, FairnessGrade grade) {
         if (players < 2 || players > MAX_PLAYERS) {
-            throw new IllegalArgumentException("built-in sets serve 2 to " + MAX_PLAYERS + " players, got " + players);
+            throw new IllegalArgumentException("relabeling sets serve 2 to " + MAX_PLAYERS + " players, got " + players);
         }
-        return cache.computeIfAbsent(players, BuiltInSets::build);
+        return cache.computeIfAbsent(players, RelabelingSets::build);
     }
 
     @Override
@@ -59,9 +59,9 @@ final class BuiltInSets implements SetSource {
         Word w = word(n);
         FairnessReport report = FairnessAnalysis.analyse(w, RankingConvention.LOWEST_FIRST);
         if (!report.orderFair()) {
-            throw new IllegalStateException("built-in set for " + n + " players is not order-fair");
+            throw new IllegalStateException("relabeling set for " + n + " players is not order-fair");
         }
-        return new ExplicitDice("builtin-" + n + "x" + w.length() / n, w.toDiceSet(),
+        return new ExplicitDice("relabeling-" + n + "x" + w.length() / n, w.toDiceSet(),
                 FairnessGrade.ORDER_FAIR, report.subsetDepth());
     }
 
