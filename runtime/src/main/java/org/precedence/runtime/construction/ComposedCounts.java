@@ -6,7 +6,6 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.precedence.runtime.analysis.PatternTable;
 import org.precedence.runtime.dice.DieNames;
 
 /**
@@ -34,19 +33,26 @@ public final class ComposedCounts {
         this.depthAfterLevel = depthAfterLevel;
     }
 
-    /** Composes the counts of {@code construction}'s word. */
+    /** Composes the counts of every pattern in {@code construction}'s word (up to 7 dice). */
     public static ComposedCounts of(Construction construction) {
         int n = construction.players();
         if (n > 7) {
             throw new IllegalArgumentException("composed counts are offered up to 7 dice, got " + n);
         }
-        PatternSpace space = new PatternSpace(n);
-        PatternTable startTable = PatternTable.count(construction.start().word());
-        BigInteger[] counts = new BigInteger[space.size];
-        for (int s = 0; s < space.size; s++) {
-            counts[s] = startTable.countOf(space.letters[s]);
-        }
-        List<Level> levels = construction.levels();
+        return of(construction, construction.levels().size(), n);
+    }
+
+    /**
+     * Composes the counts of the patterns of at most {@code maxLength} letters in the word after
+     * the first {@code levelCount} levels. Occurrences of a short pattern in a concatenation only
+     * split into shorter ones, so short patterns never need long ones: checking depth d needs
+     * patterns up to length d only, which keeps this cheap for any number of dice.
+     */
+    public static ComposedCounts of(Construction construction, int levelCount, int maxLength) {
+        int n = construction.players();
+        PatternSpace space = new PatternSpace(n, maxLength);
+        BigInteger[] counts = startCounts(construction.start().word(), space);
+        List<Level> levels = construction.levels().subList(0, levelCount);
         int[] depths = new int[levels.size()];
         int[] sigma = new int[n];
         int[] inverse = new int[n];
@@ -76,6 +82,30 @@ public final class ComposedCounts {
             depths[li] = depthOf(space, counts);
         }
         return new ComposedCounts(n, space, counts, depths);
+    }
+
+    /** Counts every pattern of the space in the start word (a short word, counted directly). */
+    private static BigInteger[] startCounts(org.precedence.runtime.dice.Word word, PatternSpace space) {
+        BigInteger[] counts = new BigInteger[space.size];
+        java.util.Arrays.fill(counts, BigInteger.ZERO);
+        counts[0] = BigInteger.ONE;
+        int[] children = new int[space.size * space.n];
+        java.util.Arrays.fill(children, -1);
+        for (int s = 1; s < space.size; s++) {
+            int[] p = space.letters[s];
+            int parent = space.prefix[s][p.length - 1];
+            children[parent * space.n + p[p.length - 1]] = s;
+        }
+        for (int i = 0; i < word.length(); i++) {
+            int x = word.letterAt(i);
+            for (int s = space.size - 1; s >= 0; s--) {
+                int c = children[s * space.n + x];
+                if (c >= 0 && counts[s].signum() != 0) {
+                    counts[c] = counts[c].add(counts[s]);
+                }
+            }
+        }
+        return counts;
     }
 
     private static BigInteger[] unit(int size) {
@@ -114,7 +144,7 @@ public final class ComposedCounts {
     /** Largest k such that, for every set of k letters, all its orderings have the same count. */
     private static int depthOf(PatternSpace space, BigInteger[] counts) {
         int depth = 1;
-        for (int k = 2; k <= space.n; k++) {
+        for (int k = 2; k <= space.maxLength; k++) {
             Map<Long, BigInteger> bySet = new java.util.HashMap<>();
             for (int s = 0; s < space.size; s++) {
                 if (space.length[s] != k) {
@@ -170,8 +200,8 @@ public final class ComposedCounts {
         return out;
     }
 
-    /** Returns whether all n! rankings have the same count. */
+    /** Returns whether all n! rankings have the same count (false when rankings were not composed). */
     public boolean orderFair() {
-        return distinctRankingCounts().size() == 1;
+        return space.maxLength == players && distinctRankingCounts().size() == 1;
     }
 }

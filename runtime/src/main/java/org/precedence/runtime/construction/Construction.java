@@ -104,6 +104,13 @@ public final class Construction {
         if (searched.isPresent() && searched.get().sidesPerDie().compareTo(best.sidesPerDie()) < 0) {
             best = searched.get();
         }
+        java.util.Optional<List<Level>> prefix = SearchedPlans.prefixFor(players);
+        if (prefix.isPresent()) {
+            Construction c = fromPrefix(StartingWord.letters(players), prefix.get());
+            if (c.sidesPerDie().compareTo(best.sidesPerDie()) < 0) {
+                best = c;
+            }
+        }
         for (StartingWord s : starts) {
             if (s.word().players() != players) {
                 continue;
@@ -117,24 +124,31 @@ public final class Construction {
     }
 
     private static Construction fromStart(StartingWord start) {
-        Construction plain = fromStart(start, false);
-        Construction top = fromStart(start, true);
+        return fromPrefix(start, List.of());
+    }
+
+    /** The cheaper of the plain tail and the top-reversal tail after {@code prefix}. */
+    private static Construction fromPrefix(StartingWord start, List<Level> prefix) {
+        Construction plain = fromPrefix(start, prefix, false);
+        Construction top = fromPrefix(start, prefix, true);
         return top != null && top.sidesPerDie().compareTo(plain.sidesPerDie()) < 0 ? top : plain;
     }
 
     /**
-     * The smallest family per level; with {@code topReversal}, the last two levels become
-     * [mirror] · S_n · reversal instead of S_n · S_n (null when that does not apply).
+     * {@code prefix}, then the smallest family per level; with {@code topReversal}, the last two
+     * levels become [mirror] · S_n · reversal instead of S_n · S_n (null when that does not apply).
      */
-    private static Construction fromStart(StartingWord start, boolean topReversal) {
+    private static Construction fromPrefix(StartingWord start, List<Level> prefix, boolean topReversal) {
         int n = start.word().players();
-        int t = start.depth();
+        int t = prefix.isEmpty() ? start.depth() : prefix.get(prefix.size() - 1).liftsTo();
         if (topReversal && (n < 4 || t > n - 2)) {
             return null;
         }
-        List<Level> levels = new ArrayList<>();
+        List<Level> levels = new ArrayList<>(prefix);
         int last = topReversal ? n - 2 : n;
-        boolean palindrome = start.word().equals(start.word().reversed());
+        boolean palindrome = prefix.isEmpty()
+                ? start.word().equals(start.word().reversed())
+                : prefix.get(prefix.size() - 1).isReversal();
         for (int k = t + 1; k <= last; k++) {
             if (k == 2) {
                 levels.add(Level.reversal(n));

@@ -18,12 +18,27 @@ final class PatternSpace {
     /** {@code suffix[s][i]}: index of the letters of s from position i on. */
     final int[][] suffix;
 
+    /** Length of the longest pattern held. */
+    final int maxLength;
+
     PatternSpace(int n) {
-        long states = org.precedence.runtime.analysis.PatternTable.stateCount(n);
-        if (n > 8) {
-            throw new IllegalArgumentException("composed counts are offered up to 8 dice, got " + n);
+        this(n, n);
+    }
+
+    /** All patterns of at most {@code maxLength} distinct letters over n letters. */
+    PatternSpace(int n, int maxLength) {
+        long states = 0;
+        long term = 1;
+        for (int k = 0; k <= maxLength; k++) {
+            states += term;
+            term *= n - k;
+        }
+        if (states > 2_000_000) {
+            throw new IllegalArgumentException("composed counts over " + n + " dice up to length " + maxLength
+                    + " need " + states + " patterns; the limit is 2000000");
         }
         this.n = n;
+        this.maxLength = maxLength;
         this.size = (int) states;
         this.length = new int[size];
         this.letters = new int[size][];
@@ -32,6 +47,9 @@ final class PatternSpace {
         letters[0] = new int[0];
         int created = 1;
         for (int s = 0; s < created; s++) {
+            if (letters[s].length == maxLength) {
+                continue;
+            }
             for (int x = 0; x < n; x++) {
                 if (contains(letters[s], x)) {
                     continue;

@@ -32,6 +32,9 @@ public final class SetSources {
      * "sides per die" means one number; the catalog's mixed-side sets stay available by id.
      */
     public static SetSource standard() {
+        // Load and verify the catalog now, when the application creates its source, so that
+        // the first request for a player count pays only for its own set.
+        Catalog.shipped();
         return withCatalog(SetSources::equalSidedCatalogSet);
     }
 

@@ -123,7 +123,14 @@ class ConstructionTest {
             assertTrue(org.precedence.runtime.analysis.LowerBounds.equalSidesAllowed(n,
                     Construction.smallest(n).sidesPerDie().longValueExact()), "n=" + n);
         }
-        for (int n = 7; n <= 12; n++) {
+        // 7 dice: the F21 prefix replaces A7 (2520 blocks) by 21 blocks at depth 3.
+        assertEquals(big(2 * 21).multiply(big(2520).pow(2)).multiply(big(4 * 5040)), Construction.smallest(7).sidesPerDie());
+        assertEquals(big(5_377_010_688_000L), Construction.smallest(7).sidesPerDie());
+        assertEquals("reversal · F21' · A7 · A7 · mirror · S7 · reversal", Construction.smallest(7).method());
+        // 9 dice: a conjugate of AGL(1,9) (72 blocks) replaces PGL(2,8) (504) at depth 3.
+        assertEquals(big(2 * 72).multiply(fact(9).shiftRight(1).pow(4)).multiply(big(4)).multiply(fact(9)),
+                Construction.smallest(9).sidesPerDie());
+        for (int n : new int[] {8, 10, 11, 12}) {
             assertEquals(Construction.smallestUniform(n).sidesPerDie(), Construction.smallest(n).sidesPerDie());
         }
     }
