@@ -22,6 +22,8 @@ import picocli.CommandLine.HelpCommand;
             org.precedence.cli.simulate.SimulateCommand.class,
             org.precedence.cli.export.ExportCommand.class,
             VerifyCommand.class,
+            SearchCommand.class,
+            CatalogCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 

@@ -26,7 +26,8 @@ import picocli.CommandLine.Model.CommandSpec;
  * file ({@code --add-key}), or measures the service under load ({@code --bench}).
  */
 @Command(name = "serve", mixinStandardHelpOptions = true,
-        description = {"Serve seeded, verifiable turn orders over HTTP/JSON (endpoints under /v1, see docs/service.md).",
+        description = {"Serve seeded, verifiable turn orders over HTTP/JSON "
+                + "(endpoints under /v1, see docs/service.md).",
             "Keys: --key-file FILE, else the environment variable " + KeyFiles.ENVIRONMENT_VARIABLE
                     + ", else ~/.precedence/service.keys (created on first start). Replicas share the key file."})
 public final class ServeCommand implements Callable<Integer> {
@@ -52,7 +53,8 @@ public final class ServeCommand implements Callable<Integer> {
     Path keyFile;
 
     @Option(names = "--add-key",
-            description = "Append a fresh key to the key file (it seals new sessions from now on) and exit.")
+            description = "Append a fresh key to the key file (it seals new sessions once the service "
+                    + "restarts with the file) and exit.")
     boolean addKey;
 
     @Option(names = "--threads", paramLabel = "N",
@@ -116,7 +118,8 @@ public final class ServeCommand implements Callable<Integer> {
         out.println("precedence service listening on " + service.baseUri() + " (" + keys.origin()
                 + ", sealing key " + keys.ring().sealingKey().id() + ", provider " + provider.name() + ")");
         if (!address.isLoopbackAddress()) {
-            out.println("note: listening beyond loopback; put a TLS-terminating proxy in front, tokens are bearer secrets");
+            out.println("note: listening beyond loopback; put a TLS-terminating proxy in front, "
+                    + "tokens are bearer secrets");
         }
         out.flush();
         stopped.await();
@@ -181,7 +184,8 @@ public final class ServeCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "errors: %d (%d responses checked against the library)%n", r.errors(), r.checked());
             out.printf(Locale.ROOT, "latency ms: p50 %.3f  p90 %.3f  p99 %.3f  p99.9 %.3f  max %.3f%n",
                     r.p50Millis(), r.p90Millis(), r.p99Millis(), r.p999Millis(), r.maxMillis());
-            out.printf(Locale.ROOT, "target %,.0f requests/s with zero errors: %s%n", minRate, passed ? "met" : "NOT met");
+            out.printf(Locale.ROOT, "target %,.0f requests/s with zero errors: %s%n", minRate,
+                    passed ? "met" : "NOT met");
             if (r.firstError() != null) {
                 out.println("first error: " + r.firstError());
             }

@@ -38,7 +38,7 @@ class SetCommandTest {
         assertEquals(ExitCodes.OK, r[0], (String) r[2]);
         JsonObject o = JsonParser.parseString((String) r[1]).getAsJsonObject();
         assertEquals("family proof", o.getAsJsonObject("verification").get("kind").getAsString());
-        assertEquals("372866824332435275294423503601664000000000000000", o.get("sidesPerDie").getAsString());
+        assertEquals("411008404246511546841295749120000000000000", o.get("sidesPerDie").getAsString());
     }
 
     @Test

@@ -5,8 +5,8 @@ import org.precedence.runtime.dice.DieNames;
 
 /** Renders a {@link PrintableSet} as CSV, Markdown or an SVG label sheet. */
 final class FaceSheets {
-    /** Label square side and gap, in millimetres (fits a 16 mm blank die face). */
-    static final double LABEL_MM = 14;
+    /** Label square side and gap, in millimetres: twelve to a row on A4, fits a 14 mm die face. */
+    static final double LABEL_MM = 13;
     static final double GAP_MM = 2;
     static final double PAGE_WIDTH_MM = 210;
     static final double MARGIN_MM = 12;
@@ -68,11 +68,16 @@ final class FaceSheets {
         StringBuilder body = new StringBuilder();
         double y = MARGIN_MM;
         body.append(text(MARGIN_MM, y + 5, 6, "start", "bold",
-                "Face labels: order-fair dice for " + set.players() + " players (set " + set.id() + ")"));
+                "Face labels for " + set.players() + " order-fair dice"));
         y += 9;
         body.append(text(MARGIN_MM, y + 3, 3.2, "start", "normal",
-                "Cut along the outlines and stick one label on each face of a blank die of the right size. "
-                        + "Lowest number acts first."));
+                "Set " + set.id() + ". Lowest number acts first; no number repeats, so ties cannot happen."));
+        y += 5;
+        body.append(text(MARGIN_MM, y + 3, 3.2, "start", "normal",
+                "Cut along the outlines and stick one label on each face of a blank die of the right size."));
+        y += 5;
+        body.append(text(MARGIN_MM, y + 3, 3.2, "start", "normal",
+                "Underlined numbers would read as another number upside down (6 and 9, 16 and 91, ...)."));
         y += 8;
         for (int d = 0; d < set.players(); d++) {
             long[] f = set.faces().get(d);
@@ -89,8 +94,7 @@ final class FaceSheets {
                 body.append(text(x + LABEL_MM / 2, top + LABEL_MM / 2 + 2.2, 6, "middle", "bold",
                         Long.toString(f[i])));
                 body.append(text(x + 1.2, top + 3, 2.4, "start", "normal", DieNames.of(d)));
-                if (f[i] % 10 == 6 || f[i] % 10 == 9) {
-                    // Underline 6 and 9 (and 16, 19, …) so they read the right way up on a die.
+                if (misreadUpsideDown(f[i])) {
                     body.append(String.format(Locale.ROOT, "<line x1=\"%.2f\" y1=\"%.2f\" x2=\"%.2f\" y2=\"%.2f\" "
                                     + "stroke=\"#000000\" stroke-width=\"0.4\"/>\n",
                             x + LABEL_MM / 2 - 2.5, top + LABEL_MM / 2 + 3.4, x + LABEL_MM / 2 + 2.5,
@@ -105,6 +109,29 @@ final class FaceSheets {
                 + "viewBox=\"0 0 %.0f %.1f\" font-family=\"Helvetica, Arial, sans-serif\">\n"
                 + "<title>Face labels for %d order-fair dice</title>\n", PAGE_WIDTH_MM, height, PAGE_WIDTH_MM, height,
                 set.players()) + body + "</svg>\n";
+    }
+
+    /**
+     * Returns whether {@code value}, turned upside down, reads as a different number: every digit
+     * must still be a digit when turned (0, 1, 8 stay, 6 and 9 swap), the turned number must
+     * not start with 0, and it must differ from the value. Such labels are underlined (common
+     * practice on dice, no source).
+     */
+    static boolean misreadUpsideDown(long value) {
+        String digits = Long.toString(value);
+        StringBuilder turned = new StringBuilder(digits.length());
+        for (int i = digits.length() - 1; i >= 0; i--) {
+            char c = digits.charAt(i);
+            switch (c) {
+                case '0', '1', '8' -> turned.append(c);
+                case '6' -> turned.append('9');
+                case '9' -> turned.append('6');
+                default -> {
+                    return false;
+                }
+            }
+        }
+        return turned.charAt(0) != '0' && !turned.toString().equals(digits);
     }
 
     private static String text(double x, double y, double size, String anchor, String weight, String text) {

@@ -46,7 +46,7 @@ final class Analysis {
         return new SupplyResult(label, n, sessions, roundsPerSession, t.rounds, complete, names, counts,
                 seat, leads, main, g, seatTest, leadTest, band,
                 streaks(t, sessions, roundsPerSession, independentRounds && complete),
-                spread(t), t.throwsTaken, t.mostThrows, expectedThrows);
+                spread(t, roundsPerSession), t.throwsTaken, t.mostThrows, expectedThrows);
     }
 
     private static SupplyResult.Test test(String on, FrequencyTests.Outcome o) {
@@ -87,15 +87,16 @@ final class Analysis {
                         : sessions * Math.pow(q, k - 1) * (1 + (rounds - k) * (1 - q));
             }
         }
-        double meanLongest = t.sessionsCompleted == 0 ? 0 : t.sumLongestRun / t.sessionsCompleted;
+        double meanLongest = t.sessionsCompleted == 0 ? 0 : (double) t.sumLongestRun / t.sessionsCompleted;
         return new SupplyResult.Streaks(t.longestRun, meanLongest, atLeast, expected);
     }
 
-    private static SupplyResult.Spread spread(Tally t) {
+    /** Only whole sessions are judged, so each has exactly {@code roundsPerSession} rounds. */
+    private static SupplyResult.Spread spread(Tally t, long roundsPerSession) {
         long judged = t.sessionsCompleted;
         double denominator = Math.max(1, judged);
         return new SupplyResult.Spread(judged, t.lopsidedSessions / denominator,
-                t.doubleShareSessions / denominator, t.sumBusiestShare / denominator,
-                t.worstBusiestShare, 1.0 / t.players);
+                t.doubleShareSessions / denominator, t.sumBusiest / (denominator * roundsPerSession),
+                (double) t.worstBusiest / roundsPerSession, 1.0 / t.players);
     }
 }

@@ -17,6 +17,11 @@ final class Format {
         return String.format(Locale.ROOT, "%.4f", p);
     }
 
+    /** "p = 0.0123", or "p < 1e-300" when the tail underflowed. */
+    static String pIs(double p) {
+        return p == 0 ? "p < 1e-300" : "p = " + p(p);
+    }
+
     static String chance(double p) {
         return String.format(Locale.ROOT, "%.1f", 100 * p);
     }

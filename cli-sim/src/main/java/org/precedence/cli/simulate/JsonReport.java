@@ -9,8 +9,9 @@ import java.io.PrintWriter;
 /**
  * Writes a {@link SimulationReport} as one JSON document.
  *
- * <p>Shape: with one player count, the document is that count's result object; with several,
- * it is {@code {"seed", "mode", "sessions", "roundsPerSession", "complete", "results": [...]}}.
+ * <p>Shape: when one player count was asked for, the document is that count's result object;
+ * when several were, it is {@code {"seed", "mode", "sessions", "roundsPerSession", "complete",
+ * "results": [...]}} (an interrupted run may list fewer results than were asked for).
  * A result object carries the contract fields {@code players}, {@code rounds} (total),
  * {@code orderCounts} (ranking → count, rankings as player letters in acting order, absent
  * beyond 6 players), {@code seatCounts} ({@code [player][position]}), {@code chiSquare} and
@@ -31,7 +32,7 @@ final class JsonReport {
     }
 
     static JsonObject toJson(SimulationReport report) {
-        if (report.counts().size() == 1) {
+        if (report.requestedPlayers().size() == 1 && report.counts().size() == 1) {
             JsonObject single = new JsonObject();
             header(report, single);
             JsonObject r = count(report.counts().get(0));
@@ -40,6 +41,9 @@ final class JsonReport {
         }
         JsonObject root = new JsonObject();
         header(report, root);
+        JsonArray asked = new JsonArray();
+        report.requestedPlayers().forEach(asked::add);
+        root.add("playerCounts", asked);
         JsonArray results = new JsonArray();
         report.counts().forEach(c -> results.add(count(c)));
         root.add("results", results);

@@ -10,6 +10,7 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.LongAdder;
+import java.util.function.Consumer;
 import java.util.function.Supplier;
 import org.precedence.api.OrderRule;
 import org.precedence.api.RandomnessMode;
@@ -50,7 +51,7 @@ public final class SimulateCommand implements Callable<Integer> {
     @Mixin
     FormatOption format = new FormatOption();
 
-    @Option(names = "--players", required = true, split = ",", paramLabel = "N[,M...]",
+    @Option(names = "--players", required = true, split = ",", paramLabel = "N",
             description = "Player counts to simulate, e.g. 4 or 3,4,5.")
     List<Integer> players;
 
@@ -62,8 +63,9 @@ public final class SimulateCommand implements Callable<Integer> {
             description = "Rounds per session (default: ${DEFAULT-VALUE}).")
     long rounds;
 
-    @Option(names = "--seed", required = true, paramLabel = "X",
-            description = "Simulation seed: any text, or hex: and 64 hex digits. Session 0 uses it as is.")
+    @Option(names = "--seed", paramLabel = "X",
+            description = "Simulation seed: any text, or hex: and 64 hex digits. Session 0 uses it as is. "
+                    + "Default: a fresh random seed, printed in the report so the run can be repeated.")
     String seed;
 
     @Option(names = "--mode", paramLabel = "MODE", defaultValue = "fast",
@@ -90,22 +92,30 @@ public final class SimulateCommand implements Callable<Integer> {
     Integer threads;
 
     @Option(names = "--benchmark",
-            description = "Instead of a report: time the provider against a plain shuffle in this process "
-                    + "(same sessions and rounds) and print rounds per second and their ratio.")
+            description = "Instead of a report: time the provider against two plain shuffles "
+                    + "(Collections.shuffle, and Fisher-Yates over xoroshiro128++) in this process, same "
+                    + "sessions and rounds, and print rounds per second and the ratios.")
     boolean benchmark;
 
     private final Supplier<TurnOrderProvider> providers;
     private final boolean handleInterrupt;
+    private final Consumer<Cancellation> onStart;
 
     /** The command as the application runs it: the provider on the class path, Ctrl-C handled. */
     public SimulateCommand() {
-        this(TurnOrderProvider::load, true);
+        this(TurnOrderProvider::load, true, c -> { });
     }
 
     /** For tests: a given provider, and no shutdown hook. */
     SimulateCommand(Supplier<TurnOrderProvider> providers, boolean handleInterrupt) {
+        this(providers, handleInterrupt, c -> { });
+    }
+
+    /** For tests: also hands over the run's cancellation, as a Ctrl-C would use it. */
+    SimulateCommand(Supplier<TurnOrderProvider> providers, boolean handleInterrupt, Consumer<Cancellation> onStart) {
         this.providers = Objects.requireNonNull(providers, "providers");
         this.handleInterrupt = handleInterrupt;
+        this.onStart = Objects.requireNonNull(onStart, "onStart");
     }
 
     @Override
@@ -146,6 +156,7 @@ public final class SimulateCommand implements Callable<Integer> {
         if (handleInterrupt) {
             cancellation.installOnInterrupt();
         }
+        onStart.accept(cancellation);
         try {
             SimulationReport report = simulate(provider, master, threadCount, cancellation, err);
             if (format.json()) {
@@ -175,7 +186,8 @@ public final class SimulateCommand implements Callable<Integer> {
         SimulationRunner runner = new SimulationRunner(threadCount, cancellation, done);
         boolean showProgress = !quiet && Terminal.attached();
         List<SimulationReport.PlayerCount> counts = new ArrayList<>();
-        try (ProgressBar bar = new ProgressBar(err, done, safeMultiply(perRun, runs), showProgress, 1000).start()) {
+        ProgressBar bar = new ProgressBar(err, done, safeMultiply(perRun, runs), showProgress, 1000).start();
+        try {
             OrderSupply fresh = new ProviderSupply(provider, master, mode, OrderRule.FRESH_EACH_ROUND);
             OrderSupply balanced = new ProviderSupply(provider, master, mode, OrderRule.BALANCED_LEAD);
             for (int n : players) {
@@ -202,12 +214,20 @@ public final class SimulateCommand implements Callable<Integer> {
                 }
                 counts.add(new SimulationReport.PlayerCount(main, bal, peers));
             }
+        } finally {
+            bar.close();
         }
         boolean complete = !cancellation.requested() && counts.size() == players.size();
-        return new SimulationReport(seed, mode.name().toLowerCase(Locale.ROOT), sessions, rounds, complete, counts);
+        return new SimulationReport(seed, mode.name().toLowerCase(Locale.ROOT), sessions, rounds, complete,
+                List.copyOf(players), counts);
     }
 
     private SessionSeed parseSeed() {
+        if (seed == null) {
+            // No seed given: draw one, and keep it in the hex form the report prints, so that
+            // passing it back as --seed repeats the run exactly.
+            seed = "hex:" + SessionSeed.random().toHex();
+        }
         try {
             return SessionSeed.parse(seed);
         } catch (IllegalArgumentException e) {

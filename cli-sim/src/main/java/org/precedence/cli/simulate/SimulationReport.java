@@ -10,10 +10,12 @@ import java.util.List;
  * @param sessions         sessions per player count
  * @param roundsPerSession rounds per session
  * @param complete         false when the run was interrupted
- * @param counts           one entry per player count, in the order asked for
+ * @param requestedPlayers the player counts asked for
+ * @param counts           one entry per player count simulated, in the order asked for (fewer
+ *                         than asked when the run was interrupted)
  */
 record SimulationReport(String seed, String mode, long sessions, long roundsPerSession, boolean complete,
-                        List<PlayerCount> counts) {
+                        List<Integer> requestedPlayers, List<PlayerCount> counts) {
 
     /**
      * Results for one player count.

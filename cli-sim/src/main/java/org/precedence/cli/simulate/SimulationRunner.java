@@ -12,8 +12,9 @@ import java.util.concurrent.atomic.LongAdder;
  *
  * <p>Determinism: the sessions are cut into at most {@value #MAX_CHUNKS} chunks of consecutive
  * sessions, fixed by the session count alone; threads take chunks in any order, but every
- * session is computed the same way whoever runs it, and chunk tallies are merged in chunk
- * order. So the result never depends on the thread count or on scheduling.
+ * session is computed the same way whoever runs it (its rounds come from its own seed), and
+ * a tally holds only integers that are added up, so the merged result never depends on the
+ * thread count or on scheduling. Each worker keeps one tally, so memory is threads × tally.
  */
 final class SimulationRunner {
     /** Rounds between two looks at the cancellation flag (and two progress updates). */
@@ -38,34 +39,39 @@ final class SimulationRunner {
     /** Simulates {@code sessions} sessions of {@code rounds} rounds each; stops early when cancelled. */
     Tally run(OrderSupply supply, int players, long sessions, long rounds) {
         int chunks = (int) Math.min(sessions, MAX_CHUNKS);
-        Tally[] tallies = new Tally[chunks];
+        int workers = Math.min(threads, chunks);
+        Tally[] tallies = new Tally[workers];
         double critical = FrequencyTests.critical(players - 1, LOPSIDED_ALPHA);
         AtomicInteger nextChunk = new AtomicInteger();
         AtomicReference<RuntimeException> failure = new AtomicReference<>();
-        Runnable worker = () -> {
-            int c;
-            while (!cancellation.requested() && (c = nextChunk.getAndIncrement()) < chunks) {
-                Tally t = new Tally(players);
-                tallies[c] = t;
-                long from = sessions * c / chunks;
-                long to = sessions * (c + 1) / chunks;
-                try {
-                    for (long s = from; s < to && !cancellation.requested(); s++) {
-                        runSession(supply.open(s, players), rounds, t, critical);
+        for (int w = 0; w < workers; w++) {
+            tallies[w] = new Tally(players);
+        }
+        List<Runnable> jobs = new ArrayList<>(workers);
+        for (int w = 0; w < workers; w++) {
+            Tally t = tallies[w];
+            jobs.add(() -> {
+                int c;
+                while (!cancellation.requested() && (c = nextChunk.getAndIncrement()) < chunks) {
+                    long from = sessions * c / chunks;
+                    long to = sessions * (c + 1) / chunks;
+                    try {
+                        for (long s = from; s < to && !cancellation.requested(); s++) {
+                            runSession(supply.open(s, players), rounds, t, critical);
+                        }
+                    } catch (RuntimeException e) {
+                        failure.compareAndSet(null, e);
+                        cancellation.request();
                     }
-                } catch (RuntimeException e) {
-                    failure.compareAndSet(null, e);
-                    cancellation.request();
                 }
-            }
-        };
-        int workers = Math.min(threads, chunks);
+            });
+        }
         if (workers == 1) {
-            worker.run();
+            jobs.get(0).run();
         } else {
             List<Thread> started = new ArrayList<>(workers);
             for (int w = 0; w < workers; w++) {
-                Thread thread = new Thread(worker, "precedence-simulate-" + w);
+                Thread thread = new Thread(jobs.get(w), "precedence-simulate-" + w);
                 thread.start();
                 started.add(thread);
             }
@@ -78,9 +84,7 @@ final class SimulationRunner {
         }
         Tally total = new Tally(players);
         for (Tally t : tallies) {
-            if (t != null) {
-                total.add(t);
-            }
+            total.add(t);
         }
         return total;
     }
@@ -160,7 +164,6 @@ final class SimulationRunner {
             double d = sessionLeads[p] - expected;
             statistic += d * d / expected;
         }
-        double busiestShare = (double) busiest / r;
         t.sessionsCompleted++;
         if (statistic > critical) {
             t.lopsidedSessions++;
@@ -168,8 +171,8 @@ final class SimulationRunner {
         if (busiest >= 2 * expected) {
             t.doubleShareSessions++;
         }
-        t.sumBusiestShare += busiestShare;
-        t.worstBusiestShare = Math.max(t.worstBusiestShare, busiestShare);
+        t.sumBusiest += busiest;
+        t.worstBusiest = Math.max(t.worstBusiest, busiest);
         t.sumLongestRun += longestInSession;
     }
 

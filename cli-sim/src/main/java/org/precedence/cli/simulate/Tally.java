@@ -1,8 +1,10 @@
 package org.precedence.cli.simulate;
 
 /**
- * Raw counts of one chunk of sessions for one player count; chunks are merged in chunk order.
- * Plain mutable fields: a tally is written by one worker and read after the workers finish.
+ * Raw counts of the sessions one worker ran, for one player count. Every figure is an integer
+ * and merging only adds or takes maxima, so the merged tally does not depend on which worker
+ * ran which sessions, nor in what order. Plain mutable fields: a tally is written by one
+ * worker and read after the workers finish.
  */
 final class Tally {
     /** Runs of the same first player of this length or longer share the last bucket. */
@@ -26,9 +28,12 @@ final class Tally {
     long sessionsCompleted;
     long lopsidedSessions;
     long doubleShareSessions;
-    double sumBusiestShare;
-    double worstBusiestShare;
-    double sumLongestRun;
+    /** Sum over whole sessions of the busiest leader's lead count. */
+    long sumBusiest;
+    /** Largest lead count of one player in one whole session. */
+    long worstBusiest;
+    /** Sum over whole sessions of the session's longest run. */
+    long sumLongestRun;
 
     Tally(int players) {
         this.players = players;
@@ -67,8 +72,8 @@ final class Tally {
         sessionsCompleted += other.sessionsCompleted;
         lopsidedSessions += other.lopsidedSessions;
         doubleShareSessions += other.doubleShareSessions;
-        sumBusiestShare += other.sumBusiestShare;
-        worstBusiestShare = Math.max(worstBusiestShare, other.worstBusiestShare);
+        sumBusiest += other.sumBusiest;
+        worstBusiest = Math.max(worstBusiest, other.worstBusiest);
         sumLongestRun += other.sumLongestRun;
     }
 

@@ -97,6 +97,18 @@ class ExportCommandTest {
     }
 
     @Test
+    void misreadUpsideDown_onlyNumbersThatTurnIntoOthers() {
+        // Common practice on dice, no source: mark a number that reads as another one when the
+        // die lies upside down.
+        for (long v : new long[] {6, 9, 16, 19, 61, 66, 68, 86, 89, 98, 99, 106}) {
+            assertTrue(FaceSheets.misreadUpsideDown(v), v + " turns into another number");
+        }
+        for (long v : new long[] {1, 8, 11, 69, 88, 96, 10, 60, 26, 36, 7, 12, 101}) {
+            assertFalse(FaceSheets.misreadUpsideDown(v), v + " cannot be misread");
+        }
+    }
+
+    @Test
     void call_constructedSetIsRefusedWithExitTwo() {
         SetSource constructed = new SetSource() {
             @Override

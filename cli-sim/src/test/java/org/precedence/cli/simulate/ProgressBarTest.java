@@ -14,10 +14,10 @@ class ProgressBarTest {
     void close_disabledBarPrintsNothing() throws Exception {
         StringWriter sink = new StringWriter();
         LongAdder done = new LongAdder();
-        try (ProgressBar bar = new ProgressBar(new PrintWriter(sink), done, 100, false, 0).start()) {
-            done.add(50);
-            Thread.sleep(300);
-        }
+        ProgressBar bar = new ProgressBar(new PrintWriter(sink), done, 100, false, 0).start();
+        done.add(50);
+        Thread.sleep(300);
+        bar.close();
         assertEquals("", sink.toString());
     }
 
@@ -26,12 +26,12 @@ class ProgressBarTest {
         StringWriter sink = new StringWriter();
         LongAdder done = new LongAdder();
         done.add(25);
-        try (ProgressBar bar = new ProgressBar(new PrintWriter(sink), done, 100, true, 0).start()) {
-            long deadline = System.nanoTime() + 5_000_000_000L;
-            while (!sink.toString().contains("%") && System.nanoTime() < deadline) {
-                Thread.sleep(20);
-            }
+        ProgressBar bar = new ProgressBar(new PrintWriter(sink), done, 100, true, 0).start();
+        long deadline = System.nanoTime() + 5_000_000_000L;
+        while (!sink.toString().contains("%") && System.nanoTime() < deadline) {
+            Thread.sleep(20);
         }
+        bar.close();
         String s = sink.toString();
         assertTrue(s.startsWith("\r["), s);
         assertTrue(s.contains("25.0%"), s);

@@ -45,6 +45,18 @@ class SimulateCommandTest {
     }
 
     @Test
+    void call_withoutSeed_drawsOneAndPrintsItSoTheRunRepeats() {
+        CommandRun first = simulate(FAIR, "--players", "3", "--sessions", "5", "--rounds", "50",
+                "--format", "json", "--quiet");
+        assertEquals(0, first.exitCode(), first.err());
+        String seed = JsonParser.parseString(first.out()).getAsJsonObject().get("seed").getAsString();
+        assertTrue(seed.matches("hex:[0-9a-f]{64}"), seed);
+        CommandRun again = simulate(FAIR, "--players", "3", "--sessions", "5", "--rounds", "50",
+                "--format", "json", "--quiet", "--seed", seed);
+        assertEquals(first.out(), again.out());
+    }
+
+    @Test
     void call_unfairSetIsFlagged() {
         CommandRun run = simulate(UNFAIR, "--players", "3", "--sessions", "20", "--rounds", "500",
                 "--seed", "meadow", "--format", "json", "--quiet");
@@ -150,7 +162,6 @@ class SimulateCommandTest {
             {"--players", "3", "--seed", "x", "--plot", dir.resolve("missing/dir/p.svg").toString()},
             {"--players", "3", "--seed", "x", "--plot", dir.toString()},
             {"--players", "3", "--seed", "x", "--plot", dir.resolve("p.png").toString()},
-            {"--players", "3"},
         };
         for (String[] args : bad) {
             CommandRun run = simulate(FAIR, args);
@@ -163,6 +174,132 @@ class SimulateCommandTest {
         try (Stream<Path> files = Files.list(dir)) {
             assertEquals(0, files.count(), "no file written on bad input");
         }
+    }
+
+    @Test
+    void call_moreThanSixPlayersReportsSeatsAndLeads(@TempDir Path dir) throws Exception {
+        // 7 dice: "ABCDEFG" followed by its reverse (2 faces per die; any 7-dice set will do
+        // here, this tests the summary path, not fairness).
+        int[] letters = new int[14];
+        for (int i = 0; i < 7; i++) {
+            letters[i] = i;
+            letters[13 - i] = i;
+        }
+        org.precedence.runtime.dice.Word w = org.precedence.runtime.dice.Word.of(7, letters);
+        var report = org.precedence.runtime.analysis.FairnessAnalysis.analyse(w.toDiceSet());
+        ExplicitTestProvider seven = new ExplicitTestProvider(Map.of(7, new org.precedence.runtime.dice.ExplicitDice(
+                "test-7", w.toDiceSet(), report.grade(), report.subsetDepth())));
+        Path svg = dir.resolve("seven.svg");
+        CommandRun run = simulate(seven, "--players", "7", "--sessions", "10", "--rounds", "700",
+                "--seed", "seven", "--format", "json", "--quiet", "--plot", svg.toString());
+        assertTrue(run.exitCode() == 0 || run.exitCode() == 1, run.err());
+        JsonObject o = JsonParser.parseString(run.out()).getAsJsonObject();
+        assertFalse(o.has("orderCounts"), "5,040 rankings are summarised, not listed");
+        assertEquals("seats", o.get("testedOn").getAsString());
+        assertEquals(36, o.get("degreesOfFreedom").getAsInt());
+        assertEquals("first players", o.getAsJsonObject("gTest").get("on").getAsString());
+        long leads = 0;
+        for (var v : o.getAsJsonArray("leadCounts")) {
+            leads += v.getAsLong();
+        }
+        assertEquals(7000, leads);
+        DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
+        f.setNamespaceAware(true);
+        assertEquals("svg", f.newDocumentBuilder().parse(svg.toFile()).getDocumentElement().getLocalName());
+    }
+
+    @Test
+    void call_fivePlayersListsTheExtremesInTextAndAllInJson() {
+        // "ABCDE" followed by its reverse: 2 faces per die, not order-fair (tests the listing only).
+        org.precedence.runtime.dice.Word w = org.precedence.runtime.dice.Word.parse("ABCDEEDCBA");
+        var report = org.precedence.runtime.analysis.FairnessAnalysis.analyse(w.toDiceSet());
+        ExplicitTestProvider five = new ExplicitTestProvider(Map.of(5, new org.precedence.runtime.dice.ExplicitDice(
+                "test-5", w.toDiceSet(), report.grade(), report.subsetDepth())));
+        CommandRun text = simulate(five, "--players", "5", "--sessions", "4", "--rounds", "300", "--seed", "five", "--quiet");
+        assertTrue(text.out().contains("rarest four and commonest four shown"), text.out());
+        CommandRun json = simulate(five, "--players", "5", "--sessions", "4", "--rounds", "300", "--seed", "five",
+                "--quiet", "--format", "json");
+        JsonObject orders = JsonParser.parseString(json.out()).getAsJsonObject().getAsJsonObject("orderCounts");
+        assertEquals(120, orders.size());
+        // Only 2^5 = 32 outcomes exist, so at most 32 rankings can ever appear.
+        assertTrue(orders.entrySet().stream().filter(e -> e.getValue().getAsLong() > 0).count() <= 32);
+        assertEquals(text.exitCode(), json.exitCode());
+    }
+
+    @Test
+    void call_interruptedRunPrintsThePartialResult() {
+        // What Ctrl-C does (through the shutdown hook): request cancellation while the run is
+        // going. Here it is requested from inside the provider after 20,000 rolls.
+        java.util.concurrent.atomic.AtomicReference<Cancellation> cancel = new java.util.concurrent.atomic.AtomicReference<>();
+        java.util.concurrent.atomic.AtomicLong rolls = new java.util.concurrent.atomic.AtomicLong();
+        org.precedence.api.TurnOrderProvider stopping = new org.precedence.api.TurnOrderProvider() {
+            @Override
+            public org.precedence.api.TurnOrderSource open(org.precedence.api.SessionSpec spec) {
+                org.precedence.api.TurnOrderSource inner = FAIR.open(spec);
+                return new org.precedence.api.TurnOrderSource() {
+                    @Override
+                    public org.precedence.api.SessionSpec spec() {
+                        return spec;
+                    }
+
+                    @Override
+                    public org.precedence.api.RoundResult roll(long round, int playerCount) {
+                        if (rolls.incrementAndGet() == 20_000) {
+                            cancel.get().request();
+                        }
+                        return inner.roll(round, playerCount);
+                    }
+                };
+            }
+
+            @Override
+            public int maxPlayers() {
+                return FAIR.maxPlayers();
+            }
+
+            @Override
+            public String name() {
+                return "stopping";
+            }
+        };
+        String[] args = {"--players", "3,4", "--sessions", "10", "--rounds", "10000", "--seed", "stop",
+            "--quiet", "--threads", "2"};
+        CommandRun json = CommandRun.of(new SimulateCommand(() -> stopping, false, cancel::set),
+                concat(args, "--format", "json"));
+        assertEquals(0, json.exitCode(), json.err());
+        JsonObject root = JsonParser.parseString(json.out()).getAsJsonObject();
+        assertFalse(root.get("complete").getAsBoolean());
+        assertEquals(2, root.getAsJsonArray("playerCounts").size(), "the shape follows what was asked for");
+        assertEquals(1, root.getAsJsonArray("results").size(), "stopped during the first player count");
+        JsonObject o = root.getAsJsonArray("results").get(0).getAsJsonObject();
+        assertFalse(o.get("complete").getAsBoolean());
+        assertEquals(3, o.get("players").getAsInt());
+        long rounds = o.get("rounds").getAsLong();
+        assertTrue(rounds >= 20_000 - 2 && rounds < 100_000, "partial: " + rounds);
+        long sum = o.getAsJsonObject("orderCounts").entrySet().stream().mapToLong(e -> e.getValue().getAsLong()).sum();
+        assertEquals(rounds, sum, "counts add up to the rounds simulated");
+
+        rolls.set(0);
+        CommandRun text = CommandRun.of(new SimulateCommand(() -> stopping, false, cancel::set), args);
+        assertTrue(text.out().contains("INTERRUPTED"), text.out());
+        assertTrue(text.out().contains("(partial)"));
+    }
+
+    @Test
+    void call_benchmarkReportsBothPeersAndRatios() {
+        CommandRun run = simulate(FAIR, "--players", "3", "--sessions", "4", "--rounds", "2000",
+                "--seed", "bench", "--benchmark", "--format", "json");
+        assertEquals(0, run.exitCode(), run.err());
+        JsonObject row = JsonParser.parseString(run.out()).getAsJsonObject().getAsJsonArray("results")
+                .get(0).getAsJsonObject();
+        assertEquals(3, row.get("players").getAsInt());
+        assertEquals(8000, row.get("roundsPerRepetition").getAsLong());
+        double precedence = row.get("precedenceRoundsPerSecond").getAsDouble();
+        double jdk = row.get("collectionsShuffleRoundsPerSecond").getAsDouble();
+        double xoro = row.get("fisherYatesXoroshiroRoundsPerSecond").getAsDouble();
+        assertTrue(precedence > 0 && jdk > 0 && xoro > 0);
+        assertEquals(precedence / jdk, row.get("ratioToCollectionsShuffle").getAsDouble(), 1e-9);
+        assertEquals(precedence / xoro, row.get("ratioToFisherYatesXoroshiro").getAsDouble(), 1e-9);
     }
 
     private static String[] concat(String[] a, String... b) {

@@ -30,9 +30,14 @@ public final class ConstructedDice implements MixedRadixDice {
     /** Start word position of each face: {@code startPosition[letter][face]}, 0-based. */
     private final int[][] startPosition;
     private final boolean startDigit;
-    private final List<FamilyProof> proofs;
+    private volatile List<FamilyProof> proofs;
 
-    /** Builds the view and runs (or recalls) every level's family proof. */
+    /**
+     * Builds the view. Levels valid only for their particular word are re-proven here by exact
+     * composed counts (the set is refused otherwise); the family proofs of uniform levels are
+     * properties of the code, run for every player count by the test suite and on demand by
+     * {@link #proofs()}, so they stay off the serving path.
+     */
     public ConstructedDice(Construction construction) {
         this.construction = construction;
         this.players = construction.players();
@@ -60,7 +65,6 @@ public final class ConstructedDice implements MixedRadixDice {
         for (int pos = 0; pos < letters.length; pos++) {
             startPosition[letters[pos]][next[letters[pos]]++] = pos;
         }
-        List<FamilyProof> levelProofs = construction.proofs();
         if (construction.hasWordSpecificLevels()) {
             ComposedCounts counts = ComposedCounts.of(construction);
             int[] depths = counts.depthAfterLevel();
@@ -74,7 +78,6 @@ public final class ConstructedDice implements MixedRadixDice {
                 throw new IllegalStateException(construction + " is not order-fair by exact count");
             }
         }
-        this.proofs = levelProofs;
     }
 
     /** Returns the plan this set follows. */
@@ -82,9 +85,19 @@ public final class ConstructedDice implements MixedRadixDice {
         return construction;
     }
 
-    /** Returns what was checked about each level's family, first level first. */
+    /**
+     * Returns what was checked about each level's family, first level first, running each
+     * family's proof the first time it is asked for in this process.
+     *
+     * @throws IllegalStateException if a proof fails (a bug, never bad input)
+     */
     public List<FamilyProof> proofs() {
-        return proofs;
+        List<FamilyProof> p = proofs;
+        if (p == null) {
+            p = List.copyOf(construction.proofs());
+            proofs = p;
+        }
+        return p;
     }
 
     @Override

@@ -9,6 +9,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Objects;
 import java.util.StringJoiner;
+import org.precedence.runtime.dice.Word;
 
 /**
  * A plan of the layered construction: a starting word and the levels applied to it, first level
@@ -36,19 +37,33 @@ public final class Construction {
         this.levels = List.copyOf(levels);
         this.players = start.word().players();
         int depth = start.depth();
+        Word startWord = start.word();
+        boolean palindrome = startWord.equals(startWord.reversed());
+        // Whether the word entering the previous level was a palindrome (for the top doubling).
+        boolean palindromeBeforePrevious = false;
+        Level previous = null;
         for (Level level : this.levels) {
             if (level.points() != players) {
                 throw new IllegalArgumentException(level.name() + " acts on " + level.points()
                         + " points, the word has " + players + " dice");
             }
-            if (level.liftsTo() != depth + 1) {
+            boolean keepsDepth = level.doubling() == Level.Doubling.MIRROR;
+            if (level.liftsTo() != (keepsDepth ? depth : depth + 1)) {
                 throw new IllegalArgumentException(level.name() + " lifts to depth " + level.liftsTo()
                         + " but the word before it has depth " + depth);
             }
-            if (level.isReversal() && depth != 1) {
+            if (level.doubling() == Level.Doubling.PAIRS && depth != 1) {
                 throw new IllegalArgumentException("reversal doubling lifts depth 1 only, not " + depth);
             }
-            depth++;
+            if (level.doubling() == Level.Doubling.TOP && (depth != players - 1 || previous == null
+                    || !previous.isFullSymmetricGroup() || !palindromeBeforePrevious)) {
+                throw new IllegalArgumentException("the top reversal needs the full group S" + players
+                        + " applied to a palindrome of depth " + (players - 2) + " just before it");
+            }
+            palindromeBeforePrevious = palindrome;
+            palindrome = level.isReversal();
+            previous = level;
+            depth = level.liftsTo();
         }
         if (depth != players) {
             throw new IllegalArgumentException("the levels reach depth " + depth + ", not " + players);
@@ -102,14 +117,39 @@ public final class Construction {
     }
 
     private static Construction fromStart(StartingWord start) {
+        Construction plain = fromStart(start, false);
+        Construction top = fromStart(start, true);
+        return top != null && top.sidesPerDie().compareTo(plain.sidesPerDie()) < 0 ? top : plain;
+    }
+
+    /**
+     * The smallest family per level; with {@code topReversal}, the last two levels become
+     * [mirror] · S_n · reversal instead of S_n · S_n (null when that does not apply).
+     */
+    private static Construction fromStart(StartingWord start, boolean topReversal) {
         int n = start.word().players();
+        int t = start.depth();
+        if (topReversal && (n < 4 || t > n - 2)) {
+            return null;
+        }
         List<Level> levels = new ArrayList<>();
-        for (int k = start.depth() + 1; k <= n; k++) {
+        int last = topReversal ? n - 2 : n;
+        boolean palindrome = start.word().equals(start.word().reversed());
+        for (int k = t + 1; k <= last; k++) {
             if (k == 2) {
                 levels.add(Level.reversal(n));
+                palindrome = true;
             } else {
                 levels.add(Level.relabelling(Families.smallestUniform(n, k), k));
+                palindrome = false;
             }
+        }
+        if (topReversal) {
+            if (!palindrome) {
+                levels.add(Level.mirror(n, n - 2));
+            }
+            levels.add(Level.relabelling(Families.symmetric(n), n - 1));
+            levels.add(Level.topReversal(n));
         }
         return new Construction(start, levels);
     }

@@ -3,7 +3,6 @@ package org.precedence.runtime.construction;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.SplittableRandom;
 
 /** Shared helpers of the family proofs: fixed sample indices, permutation checks, tuple ranks. */
 final class FamilySamples {
@@ -19,14 +18,10 @@ final class FamilySamples {
         out.add(BigInteger.ZERO);
         out.add(BigInteger.ONE);
         out.add(order.subtract(BigInteger.ONE));
-        SplittableRandom random = new SplittableRandom(0x5eed_0000L + n);
+        java.util.Random random = new java.util.Random(0x5eed_0000L + n);
         int bits = order.bitLength() + 8;
         for (int i = 0; i < COUNT; i++) {
-            StringBuilder hex = new StringBuilder();
-            for (int b = 0; b < bits; b += 60) {
-                hex.append(String.format("%015x", random.nextLong() >>> 4));
-            }
-            out.add(new BigInteger(hex.toString(), 16).mod(order));
+            out.add(new BigInteger(bits, random).mod(order));
         }
         return out;
     }

@@ -17,14 +17,28 @@ public final class Level {
     private final int[][] listed;
     private final boolean[] listedReversed;
     private final String listedName;
+    private final Doubling doubling;
 
-    private Level(PermutationFamily family, int points, int liftsTo) {
+    /** What a "W, then W backwards" level is used for; the construction checks the context. */
+    enum Doubling {
+        /** Not a doubling level. */
+        NONE,
+        /** Depth 1 to 2: any equal-sided word. */
+        PAIRS,
+        /** Depth kept; the result is a palindrome, as the top doubling needs. */
+        MIRROR,
+        /** Depth n−1 to n: after the full group S_n applied to a palindrome. */
+        TOP
+    }
+
+    private Level(PermutationFamily family, int points, int liftsTo, Doubling doubling) {
         this.family = family;
         this.points = points;
         this.liftsTo = liftsTo;
         this.listed = null;
         this.listedReversed = null;
         this.listedName = null;
+        this.doubling = doubling;
     }
 
     private Level(String name, int points, int liftsTo, int[][] listed, boolean[] reversed) {
@@ -34,6 +48,7 @@ public final class Level {
         this.listed = listed;
         this.listedReversed = reversed;
         this.listedName = name;
+        this.doubling = Doubling.NONE;
     }
 
     /**
@@ -73,12 +88,34 @@ public final class Level {
             throw new IllegalArgumentException(family.name() + " is uniform on tuples up to length "
                     + family.uniformTuples() + ", so it cannot lift depth to " + liftsTo);
         }
-        return new Level(family, family.points(), liftsTo);
+        return new Level(family, family.points(), liftsTo, Doubling.NONE);
     }
 
     /** Reversal doubling: W then W backwards, lifting depth 1 to 2 for equal side counts. */
     public static Level reversal(int points) {
-        return new Level(null, points, 2);
+        return new Level(null, points, 2, Doubling.PAIRS);
+    }
+
+    /**
+     * Mirror: W then W backwards, keeping depth {@code depth} and making the word a palindrome
+     * (a palindrome's pattern counts are symmetric under reading backwards).
+     */
+    public static Level mirror(int points, int depth) {
+        return new Level(null, points, depth, Doubling.MIRROR);
+    }
+
+    /**
+     * Top doubling: W then W backwards, lifting depth n−1 to n. Valid (and accepted by {@link
+     * Construction}) only when W is the full group S_n applied to a palindrome of depth n−2;
+     * see {@link #proof()} for why.
+     */
+    public static Level topReversal(int points) {
+        return new Level(null, points, points, Doubling.TOP);
+    }
+
+    /** Returns the role of a doubling level ({@link Doubling#NONE} for other levels). */
+    Doubling doubling() {
+        return doubling;
     }
 
     /** Returns the family name, or {@code reversal}. */
@@ -86,7 +123,10 @@ public final class Level {
         if (listed != null) {
             return listedName;
         }
-        return family == null ? "reversal" : family.name();
+        if (family == null) {
+            return doubling == Doubling.MIRROR ? "mirror" : "reversal";
+        }
+        return family.name();
     }
 
     /** Returns the number of blocks (the factor on the side count). */
@@ -110,6 +150,11 @@ public final class Level {
     /** Returns whether this is reversal doubling. */
     public boolean isReversal() {
         return family == null && listed == null;
+    }
+
+    /** Returns whether this level relabels by every permutation of the letters. */
+    boolean isFullSymmetricGroup() {
+        return family instanceof SymmetricFamily;
     }
 
     /** Returns the family, or null for reversal doubling. */
@@ -147,6 +192,19 @@ public final class Level {
             return new FamilyProof(listedName, points, blocks(), 0,
                     "listed for its previous word only; valid because the exact composed counts of the"
                             + " word after this level have subset depth " + liftsTo);
+        }
+        if (doubling == Doubling.MIRROR) {
+            return new FamilyProof("mirror", points, BigInteger.TWO, liftsTo,
+                    "two words of depth " + liftsTo + " and equal sides in a row keep depth " + liftsTo
+                            + " (split patterns count the same for every pattern); W followed by W"
+                            + " backwards is a palindrome, so N(rev u) = N(u) for every pattern u");
+        }
+        if (doubling == Doubling.TOP) {
+            return new FamilyProof("reversal", points, BigInteger.TWO, points,
+                    "W = σ₁(V)…σ_r(V) over all of S_n with V a palindrome of depth n−2: the terms of"
+                            + " N_W(w) + N_W(rev w) that depend on w pair up as (r−1)·m·Σ_σ N_V(σ⁻¹P) for an"
+                            + " (n−1)-pattern P, the same for every w since σ⁻¹P runs over all (n−1)-tuples;"
+                            + " so W then W backwards counts every ranking N_W(w) + N_W(rev w) + const times");
         }
         if (family == null) {
             return new FamilyProof("reversal", points, BigInteger.TWO, 2,

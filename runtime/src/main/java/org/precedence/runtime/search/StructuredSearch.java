@@ -104,15 +104,18 @@ public final class StructuredSearch {
     }
 
     /**
-     * The five-dice recipe: every class of four dice with 6 sides and depth 3 (exhaustive),
-     * raised to order-fair four dice of 12 sides with two renamed copies; a fifth die of 12
-     * sides added in every way that keeps depth 4; then, per candidate, first an attempt to
-     * finish with five renamed copies (60 sides), then with a renamed copy appended (same
-     * depth, 24 sides… counted as the pair W·σ(W)) followed by five copies (120 sides).
-     * Returns the first order-fair result in the fixed visiting order.
+     * The five-dice recipe. Steps, each one searched exhaustively within its own space:
+     * <ol>
+     *   <li>every class of four 6-sided dice of depth 3 (every three of them order-fair);</li>
+     *   <li>each raised to order-fair four 12-sided dice by one renamed copy ({@link #raise});</li>
+     *   <li>a fifth 12-sided die added in every way that keeps depth 4 ({@link #addDie});</li>
+     *   <li>per candidate W: first five renamed copies of W (60 sides); failing that, for each
+     *       renaming σ in order, the pair W·σ(W) (still depth 4, 24 sides) joined as five
+     *       renamed copies (120 sides).</li>
+     * </ol>
+     * Returns the first order-fair result in this fixed visiting order, with its steps.
      */
     public static Optional<Construction> fiveDice() {
-        List<String> steps = new ArrayList<>();
         SearchResult depthThree = FairSetSearch.run(
                 new SearchRequest(new int[] {6, 6, 6, 6}, 3, null, 1, 0, null));
         BalancedRelabeling five = new BalancedRelabeling(5);
@@ -127,41 +130,39 @@ public final class StructuredSearch {
                 int candidateIndex = 0;
                 for (Word candidate : addDie(four, 12, 4)) {
                     candidateIndex++;
-                    String prefix = "exhaustive search: 4 dice x 6 sides, depth 3, class " + baseIndex
-                            + " of " + depthThree.classes() + " (" + base + ")";
-                    String raised = "joined with 1 renamed copy: order-fair 4 dice x 12 sides, class "
-                            + fourIndex + " (" + four + ")";
-                    String added = "added die E (12 sides) keeping depth 4: class " + candidateIndex
-                            + " (" + candidate + ")";
+                    List<String> steps = new ArrayList<>(List.of(
+                            "exhaustive search: 4 dice x 6 sides with depth 3, class " + baseIndex
+                                    + " of " + depthThree.classes() + ": " + base,
+                            "joined with one renamed copy: order-fair 4 dice x 12 sides, class "
+                                    + fourIndex + ": " + four,
+                            "added die E with 12 sides keeping depth 4, class " + candidateIndex
+                                    + ": " + candidate));
                     List<int[]> direct = five.find(candidate, 5, 5, 1, control);
                     if (!direct.isEmpty()) {
-                        Word result = five.join(candidate, direct.get(0));
-                        return Optional.of(new Construction(result, List.of(prefix, raised, added,
-                                "joined 5 renamed copies " + describe(perms, direct.get(0))
-                                        + ": order-fair 5 dice x 60 sides")));
+                        steps.add("joined 5 renamed copies " + describe(perms, direct.get(0))
+                                + ": order-fair 5 dice x 60 sides");
+                        return checked(five.join(candidate, direct.get(0)), steps);
                     }
                     for (int s = 0; s < perms.length; s++) {
                         Word doubled = candidate.concat(candidate.relabel(perms[s]));
                         List<int[]> f = five.find(doubled, 5, 5, 1, control);
                         if (!f.isEmpty()) {
-                            Word result = five.join(doubled, f.get(0));
-                            if (FairnessAnalysis.analyse(result, RankingConvention.LOWEST_FIRST)
-                                    .orderFair()) {
-                                steps.add(prefix);
-                                steps.add(raised);
-                                steps.add(added);
-                                steps.add("appended the copy renamed by " + name(perms[s])
-                                        + ": depth 4, 24 sides");
-                                steps.add("joined 5 renamed copies " + describe(perms, f.get(0))
-                                        + ": order-fair 5 dice x 120 sides");
-                                return Optional.of(new Construction(result, steps));
-                            }
+                            steps.add("appended the copy renamed by " + name(perms[s])
+                                    + ": depth 4, 24 sides");
+                            steps.add("joined 5 renamed copies " + describe(perms, f.get(0))
+                                    + ": order-fair 5 dice x 120 sides");
+                            return checked(five.join(doubled, f.get(0)), steps);
                         }
                     }
                 }
             }
         }
         return Optional.empty();
+    }
+
+    private static Optional<Construction> checked(Word word, List<String> steps) {
+        verified(List.of(word), word.players());
+        return Optional.of(new Construction(word, steps));
     }
 
     private static String describe(int[][] perms, int[] order) {

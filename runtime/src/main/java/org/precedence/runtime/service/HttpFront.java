@@ -25,6 +25,8 @@ import java.util.Map;
 final class HttpFront implements HttpHandler {
     private static final System.Logger LOG = System.getLogger(HttpFront.class.getName());
     private static final int MAX_QUERY_CHARS = 1024;
+    /** Oversized bodies up to this size are read to their end before the 413 is sent. */
+    static final long DRAIN_LIMIT = 1 << 20;
 
     private final Router router;
     private final int maxBodyBytes;
@@ -44,10 +46,11 @@ final class HttpFront implements HttpHandler {
         } catch (Router.MethodNotAllowed e) {
             reply = Reply.error(e);
             allow = e.allow();
+        } catch (BodyTooLarge e) {
+            reply = Reply.error(e);
+            closeAfter = !e.drained;
         } catch (ApiException e) {
             reply = Reply.error(e);
-            // An unread remainder (oversized body) would be parsed as the next request.
-            closeAfter = e.status() == 413;
         } catch (RuntimeException e) {
             LOG.log(Level.ERROR, "internal error on " + exchange.getRequestMethod() + " "
                     + exchange.getRequestURI().getRawPath(), e);
@@ -84,17 +87,18 @@ final class HttpFront implements HttpHandler {
                 throw ApiException.badRequest("Content-Length must be a decimal byte count");
             }
             if (declared > maxBodyBytes) {
-                throw tooLarge();
+                throw tooLarge(declared <= DRAIN_LIMIT && drain(exchange.getRequestBody()));
             }
         }
         byte[] bytes;
-        try (InputStream in = exchange.getRequestBody()) {
+        InputStream in = exchange.getRequestBody();
+        try {
             bytes = readAtMost(in, maxBodyBytes + 1);
         } catch (IOException e) {
             throw new ApiException(400, "unreadable_body", "the request body could not be read: " + e.getMessage());
         }
         if (bytes.length > maxBodyBytes) {
-            throw tooLarge();
+            throw tooLarge(drain(in));
         }
         if (bytes.length > 0) {
             String type = h.getFirst("Content-Type");
@@ -113,8 +117,43 @@ final class HttpFront implements HttpHandler {
         }
     }
 
-    private ApiException tooLarge() {
-        return new ApiException(413, "body_too_large", "request bodies are limited to " + maxBodyBytes + " bytes");
+    private BodyTooLarge tooLarge(boolean drained) {
+        return new BodyTooLarge("request bodies are limited to " + maxBodyBytes + " bytes", drained);
+    }
+
+    /*
+     * Answering before the client has finished sending, then closing, makes the kernel reset
+     * the connection (unread data in the receive buffer), and a reset can destroy the answer
+     * in flight (RFC 9112 §9.6 describes this hazard). So the rest of a moderately oversized
+     * body is read and thrown away first; only beyond DRAIN_LIMIT is the connection closed
+     * at once. The request time limit bounds the draining.
+     */
+    private static boolean drain(InputStream in) {
+        byte[] buf = new byte[8192];
+        long total = 0;
+        try {
+            int n;
+            while ((n = in.read(buf)) > 0) {
+                total += n;
+                if (total > DRAIN_LIMIT) {
+                    return false;
+                }
+            }
+            return true;
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
+    /** A 413 that knows whether the rest of the body was consumed (else the connection closes). */
+    static final class BodyTooLarge extends ApiException {
+        private static final long serialVersionUID = 1L;
+        final boolean drained;
+
+        BodyTooLarge(String detail, boolean drained) {
+            super(413, "body_too_large", detail);
+            this.drained = drained;
+        }
     }
 
     private static byte[] readAtMost(InputStream in, int limit) throws IOException {

@@ -63,18 +63,21 @@ final class JsonFields {
     /** Reads an integer element bounded to [min, max]; {@code name} is the full path. */
     static long integer(JsonElement e, String name, long min, long max) {
         if (e == null || !e.isJsonPrimitive() || !e.getAsJsonPrimitive().isNumber()) {
-            throw ApiException.badRequest("\"" + name + "\" must be an integer " + min + ".." + max + ", got " + kind(e));
+            throw ApiException.badRequest("\"" + name + "\" must be an integer " + min + ".." + max
+                    + ", got " + kind(e));
         }
         BigDecimal v = e.getAsBigDecimal();
         BigDecimal stripped = v.signum() == 0 ? BigDecimal.ZERO : v.stripTrailingZeros();
         if (stripped.scale() > 0) {
-            throw ApiException.badRequest("\"" + name + "\" must be an integer " + min + ".." + max + ", got " + abbreviate(v.toString()));
+            throw ApiException.badRequest("\"" + name + "\" must be an integer " + min + ".." + max
+                    + ", got " + abbreviate(v.toString()));
         }
         // Checked before any conversion: "1e999999999" must not make a billion-digit integer.
         BigDecimal integral = stripped;
         if (stripped.precision() - stripped.scale() > 19
                 || integral.compareTo(BigDecimal.valueOf(min)) < 0 || integral.compareTo(BigDecimal.valueOf(max)) > 0) {
-            throw ApiException.badRequest("\"" + name + "\" must be " + min + ".." + max + ", got " + abbreviate(v.toString()));
+            throw ApiException.badRequest("\"" + name + "\" must be " + min + ".." + max
+                    + ", got " + abbreviate(v.toString()));
         }
         return integral.longValueExact();
     }

@@ -106,7 +106,8 @@ public final class KeyFiles {
     /** Returns the file text for a ring, oldest key first. */
     public static String format(KeyRing ring) {
         StringBuilder sb = new StringBuilder();
-        sb.append("# Precedence service keys: keep secret, owner-only. Oldest first; the last key seals new sessions.\n");
+        sb.append("# Precedence service keys: keep secret, owner-only. ")
+                .append("Oldest first; the last key seals new sessions.\n");
         for (ServiceKey k : ring.keys()) {
             sb.append(k.id()).append(':')
                     .append(Base64.getUrlEncoder().withoutPadding().encodeToString(k.material())).append('\n');
@@ -285,7 +286,8 @@ public final class KeyFiles {
         try {
             perms = view.readAttributes().permissions();
         } catch (IOException e) {
-            throw new IllegalArgumentException("cannot read the permissions of key file " + file + ": " + describe(e), e);
+            throw new IllegalArgumentException("cannot read the permissions of key file " + file + ": "
+                    + describe(e), e);
         }
         for (PosixFilePermission p : perms) {
             if (!p.name().startsWith("OWNER_")) {

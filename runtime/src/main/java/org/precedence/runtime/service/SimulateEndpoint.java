@@ -4,6 +4,7 @@ import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import java.util.List;
 import java.util.Set;
+import java.util.concurrent.Semaphore;
 import org.precedence.api.OrderRule;
 import org.precedence.api.RandomnessMode;
 import org.precedence.api.RankingConvention;
@@ -12,13 +13,15 @@ import org.precedence.api.SessionSeed;
 import org.precedence.api.SessionSpec;
 import org.precedence.api.TurnOrderSource;
 import org.precedence.runtime.dice.DieNames;
+import org.precedence.runtime.provider.DiceSession;
 
 /**
  * POST /v1/simulate: rolls rounds 0..R-1 of a session and tallies who leads, who lands where,
  * and (up to {@value #MAX_RANKING_PLAYERS} players) how often each ranking came up, with
  * Pearson's chi-square statistic against the uniform expectation. Bounded by
  * {@link ServiceLimits#maxSimulationRounds()} and {@link ServiceLimits#maxSimulationRolls()}.
- * The seed is returned, so anyone can repeat the run.
+ * The seed is returned, so anyone can repeat the run. At most
+ * {@link ServiceLimits#maxConcurrentSimulations()} run at once; beyond that, 503 {@code busy}.
  */
 final class SimulateEndpoint implements Endpoint {
     static final int MAX_RANKING_PLAYERS = 6;
@@ -27,9 +30,13 @@ final class SimulateEndpoint implements Endpoint {
     private static final int MAX_SEED_CHARS = 256;
 
     private final Backend backend;
+    // Simulations are the one costly request; bounding how many run at once keeps the other
+    // workers free for round requests.
+    private final Semaphore gate;
 
     SimulateEndpoint(Backend backend) {
         this.backend = backend;
+        this.gate = new Semaphore(backend.limits.maxConcurrentSimulations());
     }
 
     @Override
@@ -61,27 +68,35 @@ final class SimulateEndpoint implements Endpoint {
         backend.set(players, org.precedence.api.FairnessGrade.ORDER_FAIR);
         TurnOrderSource source = backend.provider.open(spec);
 
+        RoundResult first;
+        try {
+            first = source.roll(0, players);
+        } catch (IllegalArgumentException e) {
+            throw new ApiException(400, "not_served", e.getMessage());
+        }
         long[] lead = new long[players];
         long[][] position = new long[players][players];
         boolean rankings = players <= MAX_RANKING_PLAYERS;
         long[] rankingCounts = rankings ? new long[factorial(players)] : null;
-        RoundResult last = null;
-        for (int r = 0; r < rounds; r++) {
-            RoundResult result;
-            try {
-                result = source.roll(r, players);
-            } catch (IllegalArgumentException e) {
-                throw new ApiException(400, "not_served", e.getMessage());
+        IntOrders orders = orders(source);
+        int[] order = new int[players];
+        if (!gate.tryAcquire()) {
+            throw new ApiException(503, "busy", "another simulation is running; simulations are limited to "
+                    + limits.maxConcurrentSimulations() + " at a time, retry shortly");
+        }
+        try {
+            for (int r = 0; r < rounds; r++) {
+                orders.orderInto(r, players, order);
+                lead[order[0]]++;
+                for (int pos = 0; pos < players; pos++) {
+                    position[order[pos]][pos]++;
+                }
+                if (rankings) {
+                    rankingCounts[rankIndex(order)]++;
+                }
             }
-            List<Integer> order = result.order();
-            lead[order.get(0)]++;
-            for (int pos = 0; pos < players; pos++) {
-                position[order.get(pos)][pos]++;
-            }
-            if (rankings) {
-                rankingCounts[rankIndex(order)]++;
-            }
-            last = result;
+        } finally {
+            gate.release();
         }
 
         JsonObject body = new JsonObject();
@@ -92,8 +107,8 @@ final class SimulateEndpoint implements Endpoint {
         body.addProperty("mode", Wire.name(spec.mode()));
         body.addProperty("rule", Wire.name(spec.rule()));
         body.addProperty("convention", Wire.name(spec.convention()));
-        body.addProperty("setId", last.setId());
-        body.addProperty("grade", Wire.name(last.grade()));
+        body.addProperty("setId", first.setId());
+        body.addProperty("grade", Wire.name(first.grade()));
         body.add("leadCounts", longs(lead));
         JsonArray pos = new JsonArray();
         for (long[] row : position) {
@@ -129,13 +144,31 @@ final class SimulateEndpoint implements Endpoint {
         return sum;
     }
 
+    /** Orders into a caller's array; the provider's allocation-free path when it has one. */
+    @FunctionalInterface
+    interface IntOrders {
+        void orderInto(long round, int players, int[] out);
+    }
+
+    static IntOrders orders(TurnOrderSource source) {
+        if (source instanceof DiceSession dice) {
+            return dice.fastOrders()::orderInto;
+        }
+        return (round, players, out) -> System.arraycopy(source.orderIndices(round, players), 0, out, 0, players);
+    }
+
     /** Lehmer code of a permutation: its index among all n! in lexicographic order. */
     static int rankIndex(List<Integer> order) {
-        int n = order.size();
+        return rankIndex(order.stream().mapToInt(Integer::intValue).toArray());
+    }
+
+    /** Lehmer code of {@code order}: its index among all n! in lexicographic order. */
+    static int rankIndex(int[] order) {
+        int n = order.length;
         int index = 0;
         boolean[] used = new boolean[n];
         for (int i = 0; i < n; i++) {
-            int v = order.get(i);
+            int v = order[i];
             int smaller = 0;
             for (int u = 0; u < v; u++) {
                 if (!used[u]) {

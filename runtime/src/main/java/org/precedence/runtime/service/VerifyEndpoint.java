@@ -60,7 +60,8 @@ final class VerifyEndpoint implements Endpoint {
         JsonArray mismatches = new JsonArray();
         for (int i = 0; i < rounds.size(); i++) {
             String where = "rounds[" + i + "].";
-            JsonFields r = new JsonFields(JsonFields.asObject(rounds.get(i), "rounds[" + i + "]"), where, ROUND_MEMBERS);
+            JsonObject entry = JsonFields.asObject(rounds.get(i), "rounds[" + i + "]");
+            JsonFields r = new JsonFields(entry, where, ROUND_MEMBERS);
             long round = r.requiredLong("round", 0, Long.MAX_VALUE);
             List<Integer> order = order(r.requiredArray("order", backend.maxPlayers()), where + "order");
             int players = backend.players(order.size(), where + "order (its length)");

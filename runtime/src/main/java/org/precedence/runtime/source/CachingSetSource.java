@@ -11,7 +11,9 @@ import org.precedence.runtime.dice.MixedRadixDice;
  * A {@link SetSource} holding built sets in a bounded Caffeine cache keyed by (players, grade).
  * Caffeine runs the builder atomically per key, so many concurrent first requests for one key
  * build it once and all receive the same set; input is validated before the cache is touched,
- * so bad requests are never built or cached.
+ * so bad requests are never built or cached. A set evicted by the size bound is rebuilt on the
+ * next request; the builder is deterministic, so the rebuilt set is the same set (same canonical
+ * hash, same faces), as {@link SetSource} promises.
  */
 final class CachingSetSource implements SetSource {
     static final String GRADES = "ORDER_FAIR, SEAT_FAIR, LEAD_FAIR";

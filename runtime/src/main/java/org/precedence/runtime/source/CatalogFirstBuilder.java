@@ -30,16 +30,29 @@ final class CatalogFirstBuilder implements Function<SetKey, MixedRadixDice> {
         if (listed.isPresent() && listed.get().grade().atLeast(key.grade())) {
             return listed.get();
         }
-        List<StartingWord> starts = listed.filter(CatalogFirstBuilder::canStart)
-                .map(d -> List.of(StartingWord.of(d)))
+        List<StartingWord> starts = listed.flatMap(CatalogFirstBuilder::asStart)
+                .map(List::of)
                 .orElse(List.of());
         return new ConstructedDice(Construction.smallest(n, starts));
     }
 
-    private static boolean canStart(MixedRadixDice d) {
-        if (!(d instanceof ExplicitDice explicit) || d.subsetDepth() < 2) {
-            return false;
+    /**
+     * Returns the catalog set as a starting word when it can be one: listed faces, equal sides,
+     * a claimed depth of at least 2 that its exact counts confirm, and few enough dice for the
+     * exact count. A set that fails any of these is simply not used as a start.
+     */
+    private static Optional<StartingWord> asStart(MixedRadixDice d) {
+        if (!(d instanceof ExplicitDice explicit) || d.subsetDepth() < 2 || d.players() > MAX_START_PLAYERS
+                || !explicit.set().equalSides()) {
+            return Optional.empty();
         }
-        return explicit.set().equalSides();
+        try {
+            return Optional.of(StartingWord.of(d));
+        } catch (IllegalStateException | IllegalArgumentException e) {
+            return Optional.empty();
+        }
     }
+
+    /** Starting words are re-counted exactly, which the pattern table offers up to this size. */
+    static final int MAX_START_PLAYERS = 8;
 }

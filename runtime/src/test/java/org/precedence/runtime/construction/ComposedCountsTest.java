@@ -1,6 +1,5 @@
 package org.precedence.runtime.construction;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -28,11 +27,12 @@ class ComposedCountsTest {
             // Each of the n! rankings gets s^n / n! of the s^n outcomes.
             BigInteger expected = c.sidesPerDie().pow(n).divide(Families.factorial(n));
             assertEquals(List.of(expected), counts.distinctRankingCounts(), "n=" + n);
-            int[] depths = new int[c.levels().size()];
-            for (int i = 0; i < depths.length; i++) {
-                depths[i] = i + 2;
+            // The depth each level claims is reached (a mirror may happen to reach more).
+            int[] reached = counts.depthAfterLevel();
+            for (int i = 0; i < reached.length; i++) {
+                assertTrue(reached[i] >= c.levels().get(i).liftsTo(), "n=" + n + " level " + i);
             }
-            assertArrayEquals(depths, counts.depthAfterLevel(), "n=" + n);
+            assertEquals(n, reached[reached.length - 1]);
         }
     }
 

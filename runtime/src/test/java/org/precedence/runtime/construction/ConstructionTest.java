@@ -41,32 +41,57 @@ class ConstructionTest {
     void smallestUniform_tableForTwoToTwelve() {
         // Group orders from standard group theory: |S_n| = n!, |A_n| = n!/2,
         // |PGL(2,q)| = (q+1)q(q−1); |M11| = 7920, |M12| = 95040 (ATLAS of Finite Group
-        // Representations). Reversal doubling contributes a factor 2.
+        // Representations). Reversal, mirror and top reversal contribute a factor 2 each.
         BigInteger two = big(2);
+        BigInteger four = big(4);
         assertEquals(two, Construction.smallestUniform(2).sidesPerDie());
         assertEquals(two.multiply(fact(3)), Construction.smallestUniform(3).sidesPerDie());
-        assertEquals(two.multiply(fact(4).pow(2)), Construction.smallestUniform(4).sidesPerDie());
-        assertEquals(two.multiply(fact(5).shiftRight(1)).multiply(fact(5).pow(2)),
+        assertEquals(big(96), Construction.smallestUniform(4).sidesPerDie());
+        assertEquals(two.multiply(fact(5).shiftRight(1)).multiply(four).multiply(fact(5)),
                 Construction.smallestUniform(5).sidesPerDie());
-        assertEquals(big(44_789_760_000L), Construction.smallestUniform(6).sidesPerDie());
-        assertEquals(two.multiply(big(120)).multiply(big(360)).multiply(big(720).pow(2)),
+        assertEquals(big(248_832_000L), Construction.smallestUniform(6).sidesPerDie());
+        assertEquals(two.multiply(big(120)).multiply(big(360)).multiply(four).multiply(big(720)),
                 Construction.smallestUniform(6).sidesPerDie());
-        assertEquals(two.multiply(fact(7).shiftRight(1).pow(3)).multiply(fact(7).pow(2)),
+        assertEquals(two.multiply(fact(7).shiftRight(1).pow(3)).multiply(four).multiply(fact(7)),
                 Construction.smallestUniform(7).sidesPerDie());
-        assertEquals(two.multiply(big(8 * 7 * 6)).multiply(fact(8).shiftRight(1).pow(3)).multiply(fact(8).pow(2)),
+        assertEquals(two.multiply(big(8 * 7 * 6)).multiply(fact(8).shiftRight(1).pow(3)).multiply(four).multiply(fact(8)),
                 Construction.smallestUniform(8).sidesPerDie());
-        assertEquals(two.multiply(big(9 * 8 * 7)).multiply(fact(9).shiftRight(1).pow(4)).multiply(fact(9).pow(2)),
+        assertEquals(two.multiply(big(9 * 8 * 7)).multiply(fact(9).shiftRight(1).pow(4)).multiply(four).multiply(fact(9)),
                 Construction.smallestUniform(9).sidesPerDie());
-        assertEquals(two.multiply(big(10 * 9 * 8)).multiply(fact(10).shiftRight(1).pow(5)).multiply(fact(10).pow(2)),
+        assertEquals(two.multiply(big(10 * 9 * 8)).multiply(fact(10).shiftRight(1).pow(5)).multiply(four).multiply(fact(10)),
                 Construction.smallestUniform(10).sidesPerDie());
-        assertEquals(two.multiply(big(7920).pow(2)).multiply(fact(11).shiftRight(1).pow(5)).multiply(fact(11).pow(2)),
+        assertEquals(two.multiply(big(7920).pow(2)).multiply(fact(11).shiftRight(1).pow(5)).multiply(four).multiply(fact(11)),
                 Construction.smallestUniform(11).sidesPerDie());
         assertEquals(two.multiply(big(12 * 11 * 10)).multiply(big(95040).pow(2))
-                        .multiply(fact(12).shiftRight(1).pow(5)).multiply(fact(12).pow(2)),
+                        .multiply(fact(12).shiftRight(1).pow(5)).multiply(four).multiply(fact(12)),
                 Construction.smallestUniform(12).sidesPerDie());
-        assertEquals("reversal · PGL(2,5) · A6 · S6 · S6", Construction.smallestUniform(6).method());
-        assertEquals("reversal · M11 · M11 · A11 · A11 · A11 · A11 · A11 · S11 · S11",
-                Construction.smallestUniform(11).method());
+        assertEquals("reversal · PGL(2,5) · A6 · mirror · S6 · reversal", Construction.smallestUniform(6).method());
+        assertEquals("reversal · M11 · M11 · A11 · A11 · A11 · A11 · A11 · mirror · S11 · reversal",
+                Construction.smallest(11).method());
+    }
+
+    @Test
+    void topReversal_needsTheFullGroupOnAPalindrome() {
+        int n = 5;
+        StartingWord letters = StartingWord.letters(n);
+        Level a5 = Level.relabelling(Families.alternating(n), 3);
+        Level s5 = Level.relabelling(Families.symmetric(n), 4);
+        // Without the mirror the word entering S5 is not a palindrome: refused ...
+        assertThrows(IllegalArgumentException.class, () -> new Construction(letters,
+                List.of(Level.reversal(n), a5, s5, Level.topReversal(n))));
+        // ... and rightly so: the same blocks, listed so that no rule is checked, are unfair.
+        int[] id = {0, 1, 2, 3, 4};
+        Level unchecked = Level.wordSpecific("unchecked", new int[][] {id, id}, new boolean[] {false, true}, n);
+        ComposedCounts counts = ComposedCounts.of(new Construction(letters, List.of(Level.reversal(n), a5, s5, unchecked)));
+        assertTrue(!counts.orderFair());
+        // A family smaller than S_n before it is refused too.
+        assertThrows(IllegalArgumentException.class, () -> new Construction(StartingWord.letters(6),
+                List.of(Level.reversal(6), Level.relabelling(Families.projective(5), 3),
+                        Level.relabelling(Families.alternating(6), 4), Level.mirror(6, 4),
+                        Level.relabelling(Families.alternating(6), 5), Level.topReversal(6))));
+        // With the mirror it is accepted, and the exact counts agree.
+        Construction ok = new Construction(letters, List.of(Level.reversal(n), a5, Level.mirror(n, 3), s5, Level.topReversal(n)));
+        assertTrue(ComposedCounts.of(ok).orderFair());
     }
 
     @Test
@@ -75,10 +100,10 @@ class ConstructionTest {
             Construction c = Construction.smallest(n);
             assertTrue(c.sidesPerDie().compareTo(Construction.plainSides(n)) < 0, "n=" + n);
             assertTrue(Construction.smallestUniform(n).sidesPerDie().compareTo(Construction.plainSides(n)) < 0);
-            assertEquals(n - 1, c.levels().size());
+            assertEquals(n, c.levels().get(c.levels().size() - 1).liftsTo());
         }
-        // Factor vs plain for 6 dice with uniform families only: 720^5 / (2·120·360·720·720) = 4320.
-        assertEquals(big(4320), Construction.plainSides(6).divide(Construction.smallestUniform(6).sidesPerDie()));
+        // Factor vs plain for 6 dice with uniform families only: 720^5 / (2·120·360·2·720·2) = 777600.
+        assertEquals(big(777_600), Construction.plainSides(6).divide(Construction.smallestUniform(6).sidesPerDie()));
     }
 
     @Test
@@ -104,10 +129,11 @@ class ConstructionTest {
     }
 
     @Test
-    void searchedPlans_areOrderFairOnTheMaterialisedWord() {
+    void searchedAndTopReversalPlans_areOrderFairOnTheMaterialisedWord() {
         // Independent of the composition: write the words out and count with the analysis engine.
-        for (int n = 3; n <= 6; n++) {
-            Construction c = Construction.smallest(n);
+        for (Construction c : List.of(Construction.smallest(3), Construction.smallest(4), Construction.smallest(5),
+                Construction.smallest(6), Construction.smallestUniform(4), Construction.smallestUniform(5))) {
+            int n = c.players();
             Word word = Materialise.byFaceValues(new ConstructedDice(c));
             assertEquals(Materialise.byDefinition(c), word);
             FairnessReport report = FairnessAnalysis.analyse(word.toDiceSet());

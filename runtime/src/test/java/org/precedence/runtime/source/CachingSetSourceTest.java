@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -85,6 +86,26 @@ class CachingSetSourceTest {
     }
 
     @Test
+    void forPlayers_afterEviction_rebuildsTheSameSet() {
+        // SetSource promises the same set for the life of the process; eviction may drop the
+        // object, so the rebuilt one must be the same set (same canonical hash, same faces).
+        CachingSetSource source = new CachingSetSource(new CatalogFirstBuilder(n -> Optional.empty()), 64, 1);
+        MixedRadixDice first = source.forPlayers(5);
+        for (int n = 6; n <= 9; n++) {
+            source.forPlayers(n);
+        }
+        source.cachedSets();
+        MixedRadixDice again = source.forPlayers(5);
+        assertEquals(first.sha256(), again.sha256());
+        assertEquals(first.id(), again.id());
+        BigInteger[] digits = new BigInteger[first.digits()];
+        for (int j = 0; j < digits.length; j++) {
+            digits[j] = first.radix(0, j).subtract(BigInteger.ONE);
+        }
+        assertEquals(first.faceValue(2, digits), again.faceValue(2, digits));
+    }
+
+    @Test
     void forPlayers_badInput_namesTheSupportedRange() {
         CountingBuilder builder = new CountingBuilder();
         CachingSetSource source = new CachingSetSource(builder, 64, 4);
@@ -125,10 +146,21 @@ class CachingSetSourceTest {
     }
 
     @Test
+    void withCatalog_overstatedCatalogDepth_isNotUsedAsStart() {
+        // ABCABC has depth 1 but claims 2 (and only lead-fairness): not a start, not served.
+        ExplicitDice liar = new ExplicitDice("liar-3", Word.parse("ABCABC").toDiceSet(), FairnessGrade.LEAD_FAIR, 2);
+        SetSource source = SetSources.withCatalog(n -> n == 3 ? Optional.of(liar) : Optional.empty());
+        MixedRadixDice three = source.forPlayers(3, FairnessGrade.ORDER_FAIR);
+        assertInstanceOf(ConstructedDice.class, three);
+        assertEquals(BigInteger.valueOf(6), three.sides(0));
+    }
+
+    @Test
     void standard_servesSixtyFourPlayers() {
         MixedRadixDice big = SetSources.standard().forPlayers(64);
         assertEquals(64, big.players());
-        assertEquals(63, big.digits());
+        assertEquals(org.precedence.runtime.construction.Construction.smallest(64).levels().size(), big.digits());
+        assertEquals(64, big.subsetDepth());
     }
 
     private static Word materialisedThree() {

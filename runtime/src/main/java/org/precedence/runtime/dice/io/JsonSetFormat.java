@@ -97,9 +97,9 @@ final class JsonSetFormat {
             }
         } catch (MalformedJsonException e) {
             // Strict readers refuse a second top-level value outright; say what it means here.
-            throw malformedAt(e, after).problem().startsWith("malformed JSON (")
-                    ? malformedAt(e, after).withProblem("unexpected content after the set's closing '}'")
-                    : malformedAt(e, after);
+            SetFormatException m = malformedAt(e, after);
+            throw m.problem().startsWith("malformed JSON (")
+                    ? m.withProblem("unexpected content after the set's closing '}'") : m;
         }
         return b.build(end);
     }

@@ -39,6 +39,8 @@ class DiceSetReaderTest {
         DiceSet c = DiceSetReader.read("{\"id\": \"x\", \"dice\": [{\"faces\": [1, 4]}, [2, 3]],"
                 + " \"note\": {\"any\": [true, null]}}");
         assertEquals(List.of("A", "B"), c.names(), "unnamed objects and other members are fine");
+        assertEquals(List.of("A", "B"), DiceSetReader.read("\uFEFF{\"dice\": [[1], [2]]}").names(),
+                "a byte-order mark is skipped");
         DiceSet d = DiceSetReader.read("{\"dice\": [[-9223372036854775808, 9223372036854775807], [0]]}");
         assertEquals(Long.MIN_VALUE, d.face(0, 0));
     }
