@@ -1,7 +1,11 @@
 package org.precedence.runtime.source;
 
+import java.util.Comparator;
 import java.util.Optional;
 import java.util.function.IntFunction;
+import org.precedence.api.FairnessGrade;
+import org.precedence.runtime.catalog.Catalog;
+import org.precedence.runtime.catalog.CatalogEntry;
 import org.precedence.runtime.dice.MixedRadixDice;
 
 /**
@@ -22,12 +26,20 @@ public final class SetSources {
     }
 
     /**
-     * The standard source. The shipped catalog is not yet part of this build, so every player
-     * count is served by the construction; once the catalog lands, pass its lookup to
-     * {@link #withCatalog(IntFunction)} here.
+     * The standard source: the shipped catalog's smallest order-fair set of n <em>equal</em>
+     * dice where it has one, the implicit construction for every other n. Served sets have
+     * equal side counts so that every player at the table rolls the same kind of die and
+     * "sides per die" means one number; the catalog's mixed-side sets stay available by id.
      */
     public static SetSource standard() {
-        return withCatalog(players -> Optional.empty());
+        return withCatalog(SetSources::equalSidedCatalogSet);
+    }
+
+    static Optional<MixedRadixDice> equalSidedCatalogSet(int players) {
+        return Catalog.shipped().entries(players).stream()
+                .filter(e -> e.grade() == FairnessGrade.ORDER_FAIR && e.sides().stream().distinct().count() == 1)
+                .min(Comparator.comparingInt(CatalogEntry::totalFaces).thenComparing(CatalogEntry::id))
+                .map(CatalogEntry::toDice);
     }
 
     /** A source consulting {@code catalog} first (it may return empty for any count). */
