@@ -108,7 +108,7 @@ public final class FastOrders implements Ranker {
         if (dice instanceof ExplicitDice explicit) {
             rankExplicit(explicit, stream, index, players, out);
         } else {
-            LazyRanker.rankInto(generator, dice, convention, stream, index, out);
+            LazyRanker.rankInto(generator, cursor, dice, convention, stream, index, out);
         }
     }
 
