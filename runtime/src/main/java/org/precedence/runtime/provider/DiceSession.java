@@ -129,7 +129,7 @@ public final class DiceSession implements TurnOrderSource {
         return out;
     }
 
-    /** Returns a new allocation-free orderer with this session's orders (one per thread). */
+    /** Returns a new fast orderer with this session's orders (one per thread; see {@link FastOrders}). */
     public FastOrders fastOrders() {
         return new FastOrders(this);
     }

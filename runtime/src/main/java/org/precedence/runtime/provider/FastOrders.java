@@ -4,18 +4,24 @@ import org.precedence.api.OrderRule;
 import org.precedence.api.RankingConvention;
 import org.precedence.runtime.dice.ExplicitDice;
 import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.randomness.BlockCursor;
 import org.precedence.runtime.randomness.BoundedSampler;
 import org.precedence.runtime.randomness.RollGenerator;
 
 /**
- * A session's orders without allocation, for simulations: {@link #orderInto} gives exactly the
+ * A session's orders for simulations: {@link #orderInto} gives exactly the
  * order of {@link DiceSession#roll} (tested), skipping the faces and result objects.
  *
- * <p>For explicit sets the roll is drawn directly: one generator block yields the attempt-0
- * words of four players, each face is taken by Lemire's method on a {@code long}, and the
+ * <p>For explicit sets the roll is drawn directly: one generator block (through a {@link
+ * BlockCursor}) yields the attempt-0 words of four players, each face is taken by Lemire's method on a {@code long}, and the
  * players are insertion-sorted by face value; a rejected word (probability below
  * sides/2^64) falls back to the general draw of the next attempts. Constructed sets take the
  * general lazy path.
+ *
+ * <p>Allocation: none for explicit sets in fast mode when rounds are asked in increasing order
+ * (the usual simulation loop: the Philox generator of each lane is stepped); a jump to another
+ * round builds one library generator (48 bytes); secure mode allocates the JDK's 32-byte MAC
+ * result per block; constructed sets allocate their lazily drawn digits.
  *
  * <p>Not thread-safe: it owns scratch arrays. Create one per thread ({@link
  * DiceSession#fastOrders()} is cheap).
@@ -25,6 +31,7 @@ public final class FastOrders implements Ranker {
     private static final int RANK_BY_COUNTING = 16;
     private final DiceSession session;
     private final RollGenerator generator;
+    private final BlockCursor cursor;
     private final RankingConvention convention;
     private final OrderRule rule;
     private final MixedRadixDice[] sets;
@@ -35,6 +42,7 @@ public final class FastOrders implements Ranker {
     FastOrders(DiceSession session) {
         this.session = session;
         this.generator = session.generator();
+        this.cursor = generator.cursor();
         this.convention = session.spec().convention();
         this.rule = session.spec().rule();
         this.sets = new MixedRadixDice[session.maxPlayers() + 1];
@@ -100,14 +108,14 @@ public final class FastOrders implements Ranker {
         if (dice instanceof ExplicitDice explicit) {
             rankExplicit(explicit, stream, index, players, out);
         } else {
-            LazyRanker.rankInto(generator, dice, convention, stream, index, out);
+            LazyRanker.rankInto(generator, cursor, dice, convention, stream, index, out);
         }
     }
 
     private void rankExplicit(ExplicitDice dice, int stream, long index, int n, int[] out) {
         long[] k = keys;
         for (int g = 0; g < n; g += RollGenerator.LANES) {
-            generator.block(index, RollGenerator.groupWord(stream, g), 0, 0, block);
+            cursor.block(index, RollGenerator.groupWord(stream, g), 0, 0, block);
             int end = Math.min(n, g + RollGenerator.LANES);
             for (int d = g; d < end; d++) {
                 long sides = dice.sideCount(d);

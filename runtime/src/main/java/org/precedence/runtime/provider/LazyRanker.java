@@ -2,6 +2,7 @@ package org.precedence.runtime.provider;
 
 import org.precedence.api.RankingConvention;
 import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.randomness.BlockCursor;
 import org.precedence.runtime.randomness.RollGenerator;
 import org.precedence.runtime.randomness.SeededFaces;
 
@@ -17,7 +18,13 @@ final class LazyRanker {
     /** Draws (stream, index) of {@code dice} and writes the players in acting order. */
     static SeededFaces rankInto(RollGenerator generator, MixedRadixDice dice, RankingConvention convention,
             int stream, long index, int[] out) {
-        SeededFaces faces = new SeededFaces(generator, dice, index, stream);
+        return rankInto(generator, null, dice, convention, stream, index, out);
+    }
+
+    /** As above, taking blocks through a per-thread {@code cursor} (may be null). */
+    static SeededFaces rankInto(RollGenerator generator, BlockCursor cursor, MixedRadixDice dice,
+            RankingConvention convention, int stream, long index, int[] out) {
+        SeededFaces faces = new SeededFaces(generator, cursor, dice, index, stream);
         rankInto(dice, faces, convention, out);
         return faces;
     }

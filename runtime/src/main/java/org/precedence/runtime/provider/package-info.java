@@ -11,6 +11,7 @@
  * <p>Promises: every round is a pure function of (spec, round, player count); a round with n
  * players rolls the served order-fair set for n, whatever was played before (players may join
  * or leave between rounds); {@link org.precedence.runtime.provider.FastOrders} gives the same
- * orders as the sessions without allocating, for simulations.
+ * orders as the sessions at simulation speed (allocation-free for explicit sets walked in
+ * round order).
  */
 package org.precedence.runtime.provider;

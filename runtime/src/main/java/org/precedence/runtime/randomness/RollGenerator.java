@@ -76,6 +76,11 @@ public abstract class RollGenerator {
      */
     public abstract void block(long c0, long c1, long c2, long c3, long[] out);
 
+    /** Returns a new per-thread cursor over this generator's blocks (same words, maybe cheaper). */
+    public BlockCursor cursor() {
+        return new BlockCursor.Direct(this);
+    }
+
     /**
      * Returns counter word {@code c1} for a stream and player: the stream in the high 32 bits,
      * the player's lane group ({@code player >>> 2}) in the low 32 bits.
