@@ -12,15 +12,18 @@ import org.precedence.runtime.randomness.RollGenerator;
  * A session's orders for simulations: {@link #orderInto} gives exactly the
  * order of {@link DiceSession#roll} (tested), skipping the faces and result objects.
  *
- * <p>For explicit sets the roll is drawn directly: one generator block (through a {@link
- * BlockCursor}) yields the attempt-0 words of four players, each face is taken by Lemire's method on a {@code long}, and the
- * players are insertion-sorted by face value; a rejected word (probability below
- * sides/2^64) falls back to the general draw of the next attempts. Constructed sets take the
- * general lazy path.
+ * <p>For explicit sets the roll is drawn directly. Under the fast algorithm (16-bit draws, every
+ * die below 2^16 sides) one generator block (through a {@link BlockCursor}) holds the attempt-0
+ * chunks of four players for four consecutive rounds; it is kept, so rounds asked in order
+ * cost a quarter of a block per group of four players. Otherwise one block yields the
+ * attempt-0 words of four players for one round. Each face is taken by Lemire's method, and
+ * the players are ranked by counting lower faces (branch-free; insertion sort above 16
+ * players); a rejected chunk or word falls back to the general draw of the next attempts.
+ * Constructed sets take the general lazy path.
  *
  * <p>Allocation: none for explicit sets in fast mode when rounds are asked in increasing order
  * (the usual simulation loop: the Philox generator of each lane is stepped); a jump to another
- * round builds one library generator (48 bytes); secure mode allocates the JDK's 32-byte MAC
+ * block builds one library generator (48 bytes); secure mode allocates the JDK's 32-byte MAC
  * result per block; constructed sets allocate their lazily drawn digits.
  *
  * <p>Not thread-safe: it owns scratch arrays. Create one per thread ({@link
@@ -36,6 +39,15 @@ public final class FastOrders implements Ranker {
     private final OrderRule rule;
     private final MixedRadixDice[] sets;
     private final long[] block = new long[RollGenerator.LANES];
+    /** Per player count: the set is explicit and every die has fewer than 2^16 sides. */
+    private final boolean[] narrow;
+    /**
+     * Narrow blocks kept per (stream, group) slot: words, draw index / 4 and counter word c1.
+     * A narrow c1 always has bit 31 set, so the initial 0 never matches.
+     */
+    private final long[][] cached = new long[8][RollGenerator.LANES];
+    private final long[] cachedIndex = new long[8];
+    private final long[] cachedGroup = new long[8];
     private long[] keys = new long[0];
     private int[] scratch = new int[0];
 
@@ -46,6 +58,7 @@ public final class FastOrders implements Ranker {
         this.convention = session.spec().convention();
         this.rule = session.spec().rule();
         this.sets = new MixedRadixDice[session.maxPlayers() + 1];
+        this.narrow = new boolean[sets.length];
     }
 
     /**
@@ -98,12 +111,22 @@ public final class FastOrders implements Ranker {
         System.arraycopy(keys, 0, faces, 0, players);
     }
 
+    private static boolean narrowSides(ExplicitDice dice) {
+        for (int d = 0; d < dice.players(); d++) {
+            if (dice.sideCount(d) >= RollGenerator.NARROW_LIMIT) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     @Override
     public void rankInto(int stream, long index, int players, int[] out) {
         MixedRadixDice dice = sets[players];
         if (dice == null) {
             dice = session.setFor(players);
             sets[players] = dice;
+            narrow[players] = generator.narrowDraws() && dice instanceof ExplicitDice e && narrowSides(e);
         }
         if (dice instanceof ExplicitDice explicit) {
             rankExplicit(explicit, stream, index, players, out);
@@ -114,17 +137,10 @@ public final class FastOrders implements Ranker {
 
     private void rankExplicit(ExplicitDice dice, int stream, long index, int n, int[] out) {
         long[] k = keys;
-        for (int g = 0; g < n; g += RollGenerator.LANES) {
-            cursor.block(index, RollGenerator.groupWord(stream, g), 0, 0, block);
-            int end = Math.min(n, g + RollGenerator.LANES);
-            for (int d = g; d < end; d++) {
-                long sides = dice.sideCount(d);
-                long face = BoundedSampler.lemire64(block[d - g], sides);
-                if (face == BoundedSampler.REJECTED) {
-                    face = redraw(stream, index, d, sides);
-                }
-                k[d] = dice.value(d, (int) face);
-            }
+        if (narrow[n]) {
+            drawNarrow(dice, stream, index, n, k);
+        } else {
+            drawWide(dice, stream, index, n, k);
         }
         if (n <= RANK_BY_COUNTING) {
             // Branch-free: player i's place is the number of lower faces. Faces are distinct
@@ -152,6 +168,52 @@ public final class FastOrders implements Ranker {
         }
         if (convention == RankingConvention.HIGHEST_FIRST) {
             RuleOrders.reverse(out, n);
+        }
+    }
+
+    /**
+     * Narrow layout: the block at (index / 4, narrow group word, 0, 0) holds attempt 0 of four
+     * consecutive indices of four players; it is kept per (stream, group), so rounds asked in
+     * order cost one block per four rounds per group of four players.
+     */
+    private void drawNarrow(ExplicitDice dice, int stream, long index, int n, long[] k) {
+        long blockIndex = index >>> 2;
+        for (int g = 0; g < n; g += RollGenerator.LANES) {
+            long c1 = RollGenerator.narrowGroupWord(stream, g);
+            int slot = ((stream & 1) << 2) | ((g >>> 2) & 3);
+            long[] words = cached[slot];
+            if (cachedIndex[slot] != blockIndex || cachedGroup[slot] != c1) {
+                cursor.block(blockIndex, c1, 0, 0, words);
+                cachedIndex[slot] = blockIndex;
+                cachedGroup[slot] = c1;
+            }
+            long word = words[(int) (index & 3)];
+            int end = Math.min(n, g + RollGenerator.LANES);
+            for (int d = g; d < end; d++) {
+                int sides = dice.sideCount(d);
+                int face = BoundedSampler.lemire16((int) (word >>> ((d & 3) << 4)) & 0xFFFF, sides);
+                if (face == BoundedSampler.REJECTED) {
+                    // Attempt 0 again, then 1, 2, …: the general rule, rarely reached.
+                    face = generator.narrowDigit(index, stream, d, 0, sides);
+                }
+                k[d] = dice.value(d, face);
+            }
+        }
+    }
+
+    /** Wide layout (64-bit words; v1 and secure mode, or sets with 2^16 sides or more). */
+    private void drawWide(ExplicitDice dice, int stream, long index, int n, long[] k) {
+        for (int g = 0; g < n; g += RollGenerator.LANES) {
+            cursor.block(index, RollGenerator.groupWord(stream, g), 0, 0, block);
+            int end = Math.min(n, g + RollGenerator.LANES);
+            for (int d = g; d < end; d++) {
+                long sides = dice.sideCount(d);
+                long face = BoundedSampler.lemire64(block[d - g], sides);
+                if (face == BoundedSampler.REJECTED) {
+                    face = redraw(stream, index, d, sides);
+                }
+                k[d] = dice.value(d, (int) face);
+            }
         }
     }
 
