@@ -25,6 +25,7 @@ import org.precedence.api.SessionSpec;
 import org.precedence.runtime.provider.DiceSession;
 import org.precedence.runtime.provider.FairDiceProvider;
 import org.precedence.runtime.provider.FastOrders;
+import org.precedence.runtime.randomness.RollGenerator;
 
 /**
  * One round's turn order against the shuffle it replaces, measured side by side:
@@ -43,6 +44,7 @@ import org.precedence.runtime.provider.FastOrders;
 @Fork(1)
 public class RollBench {
     private FastOrders fast;
+    private FastOrders fastV1;
     private FastOrders secure;
     private DiceSession session;
     private final int[] out = new int[16];
@@ -60,6 +62,8 @@ public class RollBench {
         fast = session.fastOrders();
         secure = provider.open(new SessionSpec(seed, RandomnessMode.SECURE, OrderRule.FRESH_EACH_ROUND,
                 RankingConvention.LOWEST_FIRST)).fastOrders();
+        fastV1 = DiceSession.open(SessionSpec.of(seed), FairDiceProvider.standardSets(), RollGenerator.FAST_V1_ID)
+                .fastOrders();
         list4 = new ArrayList<>(List.of(0, 1, 2, 3));
         list10 = new ArrayList<>(List.of(0, 1, 2, 3, 4, 5, 6, 7, 8, 9));
         random = new Random(20261202L);
@@ -81,6 +85,14 @@ public class RollBench {
     @Benchmark
     public void fastWithFaces4(Blackhole bh) {
         fast.orderInto(nextRound(), 4, out, faces);
+        bh.consume(out);
+        bh.consume(faces);
+    }
+
+    /** The retired v1 fast algorithm (one block per round), for comparison in the same run. */
+    @Benchmark
+    public void fastV1WithFaces4(Blackhole bh) {
+        fastV1.orderInto(nextRound(), 4, out, faces);
         bh.consume(out);
         bh.consume(faces);
     }

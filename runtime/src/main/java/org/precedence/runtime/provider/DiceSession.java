@@ -31,14 +31,34 @@ public final class DiceSession implements TurnOrderSource {
     private final RollGenerator generator;
 
     DiceSession(SessionSpec spec, SetSource sets) {
-        this.spec = Objects.requireNonNull(spec, "spec");
-        this.sets = Objects.requireNonNull(sets, "sets");
-        this.generator = RollGenerator.of(spec.mode(), spec.seed());
+        this(spec, sets, RollGenerator.algorithmId(Objects.requireNonNull(spec, "spec").mode()));
     }
 
-    /** Opens a session over {@code sets} directly (the provider does this for engines). */
+    private DiceSession(SessionSpec spec, SetSource sets, String algorithmId) {
+        this.spec = Objects.requireNonNull(spec, "spec");
+        this.sets = Objects.requireNonNull(sets, "sets");
+        this.generator = RollGenerator.of(algorithmId, spec.seed());
+        if (RollGenerator.modeOf(algorithmId) != spec.mode()) {
+            throw new IllegalArgumentException("algorithm " + algorithmId + " is not of mode " + spec.mode());
+        }
+    }
+
+    /**
+     * Opens a session over {@code sets} directly (the provider does this for engines), with the
+     * current algorithm of the spec's mode.
+     */
     public static DiceSession open(SessionSpec spec, SetSource sets) {
         return new DiceSession(spec, sets);
+    }
+
+    /**
+     * Opens a session that rolls with algorithm {@code algorithmId} (one of {@link
+     * RollGenerator#ALGORITHM_IDS}), e.g. to replay a log written under an earlier algorithm.
+     *
+     * @throws IllegalArgumentException if the id is unknown or not of the spec's mode
+     */
+    public static DiceSession open(SessionSpec spec, SetSource sets, String algorithmId) {
+        return new DiceSession(spec, sets, Objects.requireNonNull(algorithmId, "algorithmId"));
     }
 
     @Override

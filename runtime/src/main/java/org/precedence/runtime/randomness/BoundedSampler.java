@@ -58,6 +58,25 @@ public final class BoundedSampler {
         return unsignedMultiplyHigh(word, radix);
     }
 
+    /**
+     * One attempt of Lemire's method with a 16-bit chunk: with m = chunk·radix (below 2^32),
+     * the attempt is rejected when {@code (m mod 2^16) < (2^16 − radix) mod radix}; otherwise
+     * the value is {@code floor(m / 2^16)}. Each value is hit by exactly
+     * {@code floor(2^16 / radix)} accepted chunks.
+     *
+     * @param chunk in {@code [0, 2^16)}
+     * @param radix in {@code [1, 2^16)}
+     * @return the value in {@code [0, radix)}, or {@link #REJECTED} (as an int, -1)
+     */
+    public static int lemire16(int chunk, int radix) {
+        int m = chunk * radix;
+        int low = m & 0xFFFF;
+        if (low < radix && low < (0x10000 - radix) % radix) {
+            return (int) REJECTED;
+        }
+        return m >>> 16;
+    }
+
     /** The high 64 bits of the unsigned 128-bit product (Java 17 has only the signed one). */
     static long unsignedMultiplyHigh(long a, long b) {
         return Math.multiplyHigh(a, b) + ((a >> 63) & b) + ((b >> 63) & a);

@@ -22,6 +22,7 @@ final class PhiloxCursor extends BlockCursor {
     private final long[] c3 = new long[SLOTS];
     private int used;
     private int victim;
+    private int last;
 
     PhiloxCursor(PhiloxGenerator generator) {
         this.generator = generator;
@@ -29,19 +30,10 @@ final class PhiloxCursor extends BlockCursor {
 
     @Override
     public void block(long a, long b, long c, long d, long[] out) {
-        int slot = -1;
-        for (int i = 0; i < used; i++) {
-            if (c1[i] == b && c2[i] == c && c3[i] == d) {
-                slot = i;
-                break;
-            }
-        }
-        if (slot < 0) {
-            slot = used < SLOTS ? used++ : victim++ % SLOTS;
-            c1[slot] = b;
-            c2[slot] = c;
-            c3[slot] = d;
-            streams[slot] = null;
+        int slot = last;
+        // The usual caller walks one lane: try the slot served last before searching.
+        if (slot >= used || c1[slot] != b || c2[slot] != c || c3[slot] != d) {
+            slot = find(b, c, d);
         }
         Philox4x64 g = streams[slot];
         // next[slot] == 0 after a wrap of c0: the kept stream would carry into c1, so rebuild.
@@ -54,5 +46,25 @@ final class PhiloxCursor extends BlockCursor {
         out[2] = g.next();
         out[3] = g.next();
         next[slot] = a + 1;
+        last = slot;
+    }
+
+    private int find(long b, long c, long d) {
+        int slot = -1;
+        for (int i = 0; i < used; i++) {
+            if (c1[i] == b && c2[i] == c && c3[i] == d) {
+                slot = i;
+                break;
+            }
+        }
+        if (slot < 0) {
+            // Round-robin eviction; the index stays in range however many requests come.
+            slot = used < SLOTS ? used++ : (victim = (victim + 1) % SLOTS);
+            c1[slot] = b;
+            c2[slot] = c;
+            c3[slot] = d;
+            streams[slot] = null;
+        }
+        return slot;
     }
 }

@@ -15,17 +15,26 @@ import org.apache.commons.rng.core.source64.Philox4x64;
  * and allocates nothing.
  */
 final class PhiloxGenerator extends RollGenerator {
+    private final String algorithmId;
+    private final boolean narrow;
     private final long key0;
     private final long key1;
 
+    /** A block function with the given key words (the algorithm id only names the layout). */
     PhiloxGenerator(long key0, long key1) {
+        this(FAST_ID, true, key0, key1);
+    }
+
+    PhiloxGenerator(String algorithmId, boolean narrow, long key0, long key1) {
+        this.algorithmId = algorithmId;
+        this.narrow = narrow;
         this.key0 = key0;
         this.key1 = key1;
     }
 
     /** Key words: little-endian 64-bit integers from bytes 0..7 and 8..15 of the derived key. */
-    static PhiloxGenerator fromKeyBytes(byte[] key) {
-        return new PhiloxGenerator(Bytes.readLongLE(key, 0), Bytes.readLongLE(key, 8));
+    static PhiloxGenerator fromKeyBytes(String algorithmId, boolean narrow, byte[] key) {
+        return new PhiloxGenerator(algorithmId, narrow, Bytes.readLongLE(key, 0), Bytes.readLongLE(key, 8));
     }
 
     long key0() {
@@ -38,7 +47,12 @@ final class PhiloxGenerator extends RollGenerator {
 
     @Override
     public String algorithmId() {
-        return FAST_ID;
+        return algorithmId;
+    }
+
+    @Override
+    public boolean narrowDraws() {
+        return narrow;
     }
 
     @Override

@@ -1,8 +1,10 @@
 package org.precedence.runtime.randomness;
 
+import java.math.BigInteger;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.List;
 import java.util.Objects;
 import org.precedence.api.RandomnessMode;
 import org.precedence.api.SessionSeed;
@@ -17,16 +19,29 @@ import org.precedence.api.SessionSeed;
  * {@code K = SHA-256(UTF-8(algorithmId) || 0x00 || seed)}, so the two modes never share a key
  * and a key exposed by fast-mode output reveals neither the seed nor the secure-mode key.
  *
+ * <p>Two word layouts exist. The <em>wide</em> layout ({@link #word}) gives one 64-bit word per
+ * draw; every algorithm uses it for digits whose radix is at least {@link #NARROW_LIMIT}. The
+ * <em>narrow</em> layout ({@link #chunk}), used by {@link #FAST_ID} for smaller radices, gives a
+ * 16-bit chunk per draw, so that one block serves four consecutive draw indices of four players.
+ * {@link #digit} applies the rule of this generator's algorithm id.
+ *
  * <p>Instances are immutable and thread-safe.
  */
 public abstract class RollGenerator {
-    /** Algorithm id of the fast mode; recorded in every log. */
-    public static final String FAST_ID = "precedence-roll-v1/philox4x64";
+    /** Algorithm id of the fast mode (16-bit draws for small radices); recorded in every log. */
+    public static final String FAST_ID = "precedence-roll-v2/philox4x64";
+    /** The first fast algorithm (one 64-bit word per draw); still replayed, no longer the default. */
+    public static final String FAST_V1_ID = "precedence-roll-v1/philox4x64";
     /** Algorithm id of the secure mode; recorded in every log. */
     public static final String SECURE_ID = "precedence-roll-v1/hmac-sha256";
 
     /** Players served by one block: the low two bits of the player index pick the word. */
     public static final int LANES = 4;
+    /** Radices below this are drawn from 16-bit chunks under {@link #FAST_ID}. */
+    public static final int NARROW_LIMIT = 1 << 16;
+    /** Every algorithm id this version implements, the default fast one first. */
+    public static final List<String> ALGORITHM_IDS = List.of(FAST_ID, FAST_V1_ID, SECURE_ID);
+    private static final long NARROW_FLAG = 1L << 31;
 
     RollGenerator() {
     }
@@ -36,8 +51,25 @@ public abstract class RollGenerator {
         Objects.requireNonNull(mode, "mode");
         Objects.requireNonNull(seed, "seed");
         return switch (mode) {
-            case FAST -> PhiloxGenerator.fromKeyBytes(deriveKey(FAST_ID, seed));
-            case SECURE -> new HmacGenerator(deriveKey(SECURE_ID, seed));
+            case FAST -> of(FAST_ID, seed);
+            case SECURE -> of(SECURE_ID, seed);
+        };
+    }
+
+    /**
+     * Returns the generator of algorithm {@code algorithmId} keyed by {@code seed}.
+     *
+     * @throws IllegalArgumentException if the id is not one of {@link #ALGORITHM_IDS}
+     */
+    public static RollGenerator of(String algorithmId, SessionSeed seed) {
+        Objects.requireNonNull(algorithmId, "algorithmId");
+        Objects.requireNonNull(seed, "seed");
+        return switch (algorithmId) {
+            case FAST_ID -> PhiloxGenerator.fromKeyBytes(FAST_ID, true, deriveKey(FAST_ID, seed));
+            case FAST_V1_ID -> PhiloxGenerator.fromKeyBytes(FAST_V1_ID, false, deriveKey(FAST_V1_ID, seed));
+            case SECURE_ID -> new HmacGenerator(deriveKey(SECURE_ID, seed));
+            default -> throw new IllegalArgumentException("unknown roll algorithm '" + algorithmId
+                    + "'; this version implements " + String.join(", ", ALGORITHM_IDS));
         };
     }
 
@@ -48,7 +80,7 @@ public abstract class RollGenerator {
 
     /** Returns the mode whose algorithm id is {@code id}, or null if the id is unknown. */
     public static RandomnessMode modeOf(String id) {
-        if (FAST_ID.equals(id)) {
+        if (FAST_ID.equals(id) || FAST_V1_ID.equals(id)) {
             return RandomnessMode.FAST;
         }
         return SECURE_ID.equals(id) ? RandomnessMode.SECURE : null;
@@ -75,6 +107,14 @@ public abstract class RollGenerator {
      * {@code out[0..3]}.
      */
     public abstract void block(long c0, long c1, long c2, long c3, long[] out);
+
+    /**
+     * Returns whether digits with a radix below {@link #NARROW_LIMIT} are drawn from 16-bit
+     * chunks ({@link #chunk}) rather than 64-bit words ({@link #word}).
+     */
+    public boolean narrowDraws() {
+        return false;
+    }
 
     /** Returns a new per-thread cursor over this generator's blocks (same words, maybe cheaper). */
     public BlockCursor cursor() {
@@ -103,5 +143,61 @@ public abstract class RollGenerator {
         long[] out = new long[LANES];
         block(index, groupWord(stream, player), digit, attempt, out);
         return out[player & 3];
+    }
+
+    /**
+     * Returns counter word {@code c1} of the narrow layout: {@link #groupWord} with bit 31 set,
+     * so narrow and wide blocks never share a counter.
+     */
+    public static long narrowGroupWord(int stream, int player) {
+        return groupWord(stream, player) | NARROW_FLAG;
+    }
+
+    /**
+     * Returns the 16-bit chunk of a narrow block for a draw index and player: bits
+     * {@code 16·(player & 3)} to {@code 16·(player & 3) + 15} of word {@code index & 3}.
+     */
+    public static int chunkOf(long[] block, long index, int player) {
+        return (int) (block[(int) (index & 3)] >>> ((player & 3) << 4)) & 0xFFFF;
+    }
+
+    /**
+     * Returns the 16-bit chunk for one draw: {@link #chunkOf} of the block at counter
+     * {@code (index >>> 2, narrowGroupWord(stream, player), digit, attempt)}.
+     */
+    public int chunk(long index, int stream, int player, int digit, long attempt) {
+        long[] out = new long[LANES];
+        block(index >>> 2, narrowGroupWord(stream, player), digit, attempt, out);
+        return chunkOf(out, index, player);
+    }
+
+    /**
+     * Returns the digit in {@code [0, radix)} with 2 ≤ radix &lt; 2^16 drawn from chunks by
+     * {@link BoundedSampler#lemire16}, attempts 0, 1, 2, …
+     */
+    public int narrowDigit(long index, int stream, int player, int digit, int radix) {
+        for (long attempt = 0; ; attempt++) {
+            int v = BoundedSampler.lemire16(chunk(index, stream, player, digit, attempt), radix);
+            if (v != BoundedSampler.REJECTED) {
+                return v;
+            }
+        }
+    }
+
+    /**
+     * Returns digit {@code digit} of {@code player} in draw (index, stream): exactly uniform in
+     * {@code [0, radix)} by this algorithm's rule (narrow chunks when {@link #narrowDraws()} and
+     * the radix is below {@link #NARROW_LIMIT}, otherwise {@link BoundedSampler#draw} on
+     * {@link #word}).
+     *
+     * @throws IllegalArgumentException if {@code radix < 1}
+     */
+    public BigInteger digit(long index, int stream, int player, int digit, BigInteger radix) {
+        Objects.requireNonNull(radix, "radix");
+        if (narrowDraws() && radix.signum() > 0 && radix.bitLength() <= 16) {
+            int r = radix.intValue();
+            return r == 1 ? BigInteger.ZERO : BigInteger.valueOf(narrowDigit(index, stream, player, digit, r));
+        }
+        return BoundedSampler.draw(radix, attempt -> word(index, stream, player, digit, attempt));
     }
 }

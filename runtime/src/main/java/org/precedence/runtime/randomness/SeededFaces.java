@@ -6,8 +6,8 @@ import org.precedence.runtime.dice.MixedRadixDice;
 
 /**
  * The faces of one draw (one index on one stream) of a set: digit j of die d is drawn, the
- * first time it is asked for, by {@link BoundedSampler#draw} from the words
- * {@code generator.word(index, stream, d, j, attempt)}, and remembered. Because every digit is
+ * first time it is asked for, exactly as {@link RollGenerator#digit} draws it (16-bit chunks
+ * or 64-bit words, by the algorithm and the radix), and remembered. Because every digit is
  * a pure function of its coordinates, the faces do not depend on which digits are asked for
  * first, or whether they are asked for at all.
  *
@@ -19,6 +19,7 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
     private final MixedRadixDice dice;
     private final long index;
     private final int stream;
+    private final boolean narrow;
     private final BigInteger[][] memo;
     private final long[] block = new long[RollGenerator.LANES];
     private long c0;
@@ -53,6 +54,7 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
         }
         this.index = index;
         this.stream = stream;
+        this.narrow = generator.narrowDraws();
         this.memo = new BigInteger[dice.players()][dice.digits()];
     }
 
@@ -61,8 +63,23 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
         BigInteger d = memo[die][digit];
         if (d == null) {
             BigInteger radix = dice.radix(die, digit);
-            if (radix.bitLength() < 63 && radix.signum() > 0) {
-                // The common case without a lambda or BigInteger arithmetic; same rule and
+            if (narrow && radix.signum() > 0 && radix.bitLength() <= 16) {
+                // Radices below 2^16 under a narrow algorithm: 16-bit chunks, the rule of
+                // RollGenerator.digit (radix 1 reads nothing).
+                int r = radix.intValue();
+                int v = 0;
+                if (r > 1) {
+                    for (long attempt = 0; ; attempt++) {
+                        long[] b = block(index >>> 2, RollGenerator.narrowGroupWord(stream, die), digit, attempt);
+                        v = BoundedSampler.lemire16(RollGenerator.chunkOf(b, index, die), r);
+                        if (v != BoundedSampler.REJECTED) {
+                            break;
+                        }
+                    }
+                }
+                d = BigInteger.valueOf(v);
+            } else if (radix.bitLength() < 63 && radix.signum() > 0) {
+                // The common wide case without a lambda or BigInteger arithmetic; same rule and
                 // words as BoundedSampler.draw (radix 1 reads no word there, and gives 0 here
                 // before any word is read).
                 long r = radix.longValue();
@@ -85,22 +102,26 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
         return d;
     }
 
-    /** The word for (die, digit, attempt); remembers the last block, which serves four dice. */
+    /** The wide word for (die, digit, attempt): word {@code die & 3} of its block. */
     private long word(int die, int digit, long attempt) {
-        long g = RollGenerator.groupWord(stream, die);
-        if (!blockValid || c0 != index || c1 != g || c2 != digit || c3 != attempt) {
+        return block(index, RollGenerator.groupWord(stream, die), digit, attempt)[die & 3];
+    }
+
+    /** The block at a counter; remembers the last one, which serves four dice. */
+    private long[] block(long a, long b, long c, long e) {
+        if (!blockValid || c0 != a || c1 != b || c2 != c || c3 != e) {
             if (cursor != null) {
-                cursor.block(index, g, digit, attempt, block);
+                cursor.block(a, b, c, e, block);
             } else {
-                generator.block(index, g, digit, attempt, block);
+                generator.block(a, b, c, e, block);
             }
-            c0 = index;
-            c1 = g;
-            c2 = digit;
-            c3 = attempt;
+            c0 = a;
+            c1 = b;
+            c2 = c;
+            c3 = e;
             blockValid = true;
         }
-        return block[die & 3];
+        return block;
     }
 
     /** Returns all digits of die {@code die}'s face, most significant first (drawing the rest). */

@@ -36,7 +36,7 @@ public final class Replayer {
         RandomnessMode mode = RollGenerator.modeOf(log.algorithm());
         if (mode == null) {
             throw new MalformedLogException("unknown algorithm '" + log.algorithm() + "'; this version replays "
-                    + RollGenerator.FAST_ID + " and " + RollGenerator.SECURE_ID);
+                    + String.join(", ", RollGenerator.ALGORITHM_IDS));
         }
         if (mode != log.mode()) {
             return mismatch(0, new Mismatch(-1, "mode", -1, -1, mode.toString(), log.mode().toString()));
@@ -49,7 +49,8 @@ public final class Replayer {
         if (!seed.matchesCommitment(log.commitment())) {
             return mismatch(0, new Mismatch(-1, "commitment", -1, -1, seed.commitment(), log.commitment()));
         }
-        DiceSession session = DiceSession.open(new SessionSpec(seed, mode, log.rule(), log.convention()), sets);
+        DiceSession session = DiceSession.open(new SessionSpec(seed, mode, log.rule(), log.convention()), sets,
+                log.algorithm());
         int checked = 0;
         for (LoggedRound logged : log.rounds()) {
             Optional<Mismatch> m = check(session, logged);

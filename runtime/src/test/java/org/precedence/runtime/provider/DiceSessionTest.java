@@ -24,6 +24,7 @@ import org.precedence.api.RoundResult;
 import org.precedence.api.SessionSeed;
 import org.precedence.api.SessionSpec;
 import org.precedence.runtime.dice.MixedRadixDice;
+import org.precedence.runtime.randomness.RollGenerator;
 import org.precedence.runtime.randomness.TwoLevelDice;
 import org.precedence.runtime.source.SetSource;
 
@@ -74,11 +75,13 @@ class DiceSessionTest {
 
     @Test
     void fastOrders_equalTheGeneralPathForEveryRuleConventionAndMode() {
-        long[] farRounds = {1_000_000_000L, Long.MAX_VALUE, Long.MAX_VALUE - 1, (1L << 40) + 3};
-        for (RandomnessMode mode : RandomnessMode.values()) {
+        long[] farRounds = {1_000_000_000L, Long.MAX_VALUE, Long.MAX_VALUE - 1, (1L << 40) + 3, 5, 2, 61, 0};
+        for (String algorithm : RollGenerator.ALGORITHM_IDS) {
+            RandomnessMode mode = RollGenerator.modeOf(algorithm);
             for (OrderRule rule : OrderRule.values()) {
                 for (RankingConvention convention : RankingConvention.values()) {
-                    DiceSession s = session(rule, convention, mode);
+                    DiceSession s = DiceSession.open(new SessionSpec(SEED, mode, rule, convention), TestSets.INSTANCE,
+                            algorithm);
                     FastOrders fast = s.fastOrders();
                     int[] out = new int[4];
                     for (int n = 2; n <= 4; n++) {
@@ -95,7 +98,7 @@ class DiceSessionTest {
                             RoundResult r = s.roll(k, n);
                             int[] general = orderOf(r);
                             assertArrayEquals(general, java.util.Arrays.copyOf(out, n),
-                                    mode + " " + rule + " " + convention + " n=" + n + " round " + k);
+                                    algorithm + " " + rule + " " + convention + " n=" + n + " round " + k);
                             java.util.Arrays.fill(out, -1);
                             fast.orderInto(k, n, out, faces);
                             assertArrayEquals(general, java.util.Arrays.copyOf(out, n));
@@ -104,6 +107,30 @@ class DiceSessionTest {
                             }
                         }
                     }
+                }
+            }
+        }
+    }
+
+    @Test
+    void fastOrders_standardSetsInAnyRoundOrderEqualTheGeneralPath() {
+        // Several lane groups (more than four players), the kept narrow block invalidated by
+        // jumps back and forth, and the standard sets' side counts.
+        SetSource standard = FairDiceProvider.standardSets();
+        java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+        for (String algorithm : RollGenerator.ALGORITHM_IDS) {
+            for (OrderRule rule : new OrderRule[] {OrderRule.FRESH_EACH_ROUND, OrderRule.BALANCED_LEAD}) {
+                DiceSession s = DiceSession.open(new SessionSpec(SEED, RollGenerator.modeOf(algorithm), rule,
+                        RankingConvention.LOWEST_FIRST), standard, algorithm);
+                FastOrders fast = s.fastOrders();
+                int max = Math.min(s.maxPlayers(), 8);
+                int[] out = new int[max];
+                for (int i = 0; i < 300; i++) {
+                    int n = 2 + random.nextInt(max - 1);
+                    long k = i % 3 == 0 ? random.nextLong(Long.MAX_VALUE) : i < 150 ? i : 300 - i;
+                    fast.orderInto(k, n, out);
+                    assertArrayEquals(orderOf(s.roll(k, n)), java.util.Arrays.copyOf(out, n),
+                            algorithm + " " + rule + " n=" + n + " round " + k);
                 }
             }
         }

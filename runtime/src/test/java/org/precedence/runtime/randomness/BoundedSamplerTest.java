@@ -32,6 +32,35 @@ class BoundedSamplerTest {
         }
     }
 
+    // Exhaustive over all 2^16 chunks (Lemire, ACM TOMACS 29(1), 2019: each value is accepted
+    // for exactly floor(2^16 / r) chunks): every radix up to 600, the catalog's side counts and
+    // radices near 2^16, where rejection is likeliest (43691 rejects a third of the chunks).
+    @Test
+    void lemire16_isExactlyUniformOnEverySixteenBitChunk() {
+        java.util.List<Integer> radices = new java.util.ArrayList<>();
+        for (int r = 1; r <= 600; r++) {
+            radices.add(r);
+        }
+        radices.addAll(java.util.List.of(1152, 32767, 32768, 32769, 43690, 43691, 65534, 65535));
+        for (int r : radices) {
+            long[] hits = new long[r];
+            int rejected = 0;
+            for (int x = 0; x < 1 << 16; x++) {
+                int v = BoundedSampler.lemire16(x, r);
+                assertEquals(BoundedSampler.lemireNarrow(x, r, 16), v, "radix " + r + ", chunk " + x);
+                if (v == BoundedSampler.REJECTED) {
+                    rejected++;
+                } else {
+                    hits[v]++;
+                }
+            }
+            for (int v = 0; v < r; v++) {
+                assertEquals((1 << 16) / r, hits[v], "radix " + r + ", value " + v);
+            }
+            assertEquals((1 << 16) % r, rejected, "radix " + r);
+        }
+    }
+
     // Exhaustive for the multi-word rule: 4-bit words, radices from 8 (the narrow Lemire limit)
     // up to 2^10, every tuple of words enumerated: each value accepted exactly once per tuple set.
     @Test

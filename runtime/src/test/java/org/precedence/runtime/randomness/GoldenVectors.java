@@ -25,11 +25,19 @@ import org.precedence.runtime.replay.SessionLogFiles;
 import org.precedence.runtime.source.SetSource;
 
 /**
- * Computes the golden vectors. Run once to create the committed file (never to "fix" it: the
- * committed vectors are a promise, and changing them needs a new algorithm id):
- * {@code java -cp ... org.precedence.runtime.randomness.GoldenVectors runtime/src/test/resources/.../golden-vectors.json}.
+ * Computes the golden vectors. Run once per algorithm generation to create its committed file
+ * (never to "fix" one: the committed vectors are a promise, and changing them needs a new
+ * algorithm id):
+ * {@code java -cp ... org.precedence.runtime.randomness.GoldenVectors v1|v2 runtime/src/test/resources/.../FILE}.
+ * {@link #V1} ({@code golden-vectors.json}) pins {@code precedence-roll-v1/philox4x64} and the
+ * secure mode; {@link #V2} ({@code golden-vectors-v2.json}) pins
+ * {@code precedence-roll-v2/philox4x64}, with the secure mode again so that it stands alone.
  */
 public final class GoldenVectors {
+    /** One generation of vectors: its file, its fast algorithm id and what it samples. */
+    record Generation(String resource, String fastId, long[][] counters, BigInteger[] radices, int digitCount) {
+    }
+
     static final String RESOURCE = "golden-vectors.json";
     static final HexFormat HEX = HexFormat.of();
     static final List<SessionSeed> SEEDS = List.of(SessionSeed.fromText("golden vectors one"),
@@ -39,6 +47,18 @@ public final class GoldenVectors {
         {-1, -1, -1, -1}};
     static final BigInteger[] RADICES = {BigInteger.valueOf(6), BigInteger.valueOf(1152),
         BigInteger.ONE.shiftLeft(62).add(BigInteger.valueOf(3)), BigInteger.ONE.shiftLeft(100).add(BigInteger.ONE)};
+    static final Generation V1 = new Generation(RESOURCE, RollGenerator.FAST_V1_ID, COUNTERS, RADICES, 2 * 2 * 4 * 2);
+    /**
+     * v2 adds a narrow-layout counter (the block of rounds 0–3 of players 0–3) and radices at
+     * both sides of 2^16, among them 43691, whose 16-bit draws are rejected a third of the time.
+     */
+    static final Generation V2 = new Generation("golden-vectors-v2.json", RollGenerator.FAST_ID,
+        new long[][] {{0, 0, 0, 0}, {0, 1L << 31, 0, 0}, {1, 1L << 31, 0, 0}, {1_000_000_000L, (1L << 32) | 2, 1, 3},
+            {-1, -1, -1, -1}},
+        new BigInteger[] {BigInteger.TWO, BigInteger.valueOf(6), BigInteger.valueOf(120), BigInteger.valueOf(1152),
+            BigInteger.valueOf(43691), BigInteger.valueOf(65535), BigInteger.valueOf(65536),
+            BigInteger.ONE.shiftLeft(62).add(BigInteger.valueOf(3)), BigInteger.ONE.shiftLeft(100).add(BigInteger.ONE)},
+        2 * 2 * 9 * 2);
 
     private GoldenVectors() {
     }
@@ -64,13 +84,14 @@ public final class GoldenVectors {
         return new ExplicitDice(id, Word.parse(word).toDiceSet(), FairnessGrade.ORDER_FAIR, Word.parse(word).players());
     }
 
-    static JsonObject roll(RandomnessMode mode, SessionSeed seed, String setId, String word, OrderRule rule,
+    static JsonObject roll(String algorithmId, SessionSeed seed, String setId, String word, OrderRule rule,
             RankingConvention convention, long round) {
         ExplicitDice dice = diceOf(setId, word);
-        DiceSession s = DiceSession.open(new SessionSpec(seed, mode, rule, convention), single(dice));
+        RandomnessMode mode = RollGenerator.modeOf(algorithmId);
+        DiceSession s = DiceSession.open(new SessionSpec(seed, mode, rule, convention), single(dice), algorithmId);
         RoundResult r = s.roll(round, dice.players());
         JsonObject o = new JsonObject();
-        o.addProperty("algorithm", RollGenerator.algorithmId(mode));
+        o.addProperty("algorithm", algorithmId);
         o.addProperty("seed", seed.toHex());
         o.addProperty("set", setId);
         o.addProperty("rule", rule.name());
@@ -90,7 +111,7 @@ public final class GoldenVectors {
         return o;
     }
 
-    static JsonObject generate() {
+    static JsonObject generate(Generation gen) {
         JsonObject root = new JsonObject();
         root.addProperty("about", "Precedence roll golden vectors: our own, computed by the reference implementation."
                 + " They never change without a new algorithm id. See docs/roll-spec.md.");
@@ -108,12 +129,12 @@ public final class GoldenVectors {
             JsonObject k = new JsonObject();
             k.addProperty("seed", seed.toHex());
             k.addProperty("commitment", seed.commitment());
-            k.addProperty("fastKey", HEX.formatHex(RollGenerator.deriveKey(RollGenerator.FAST_ID, seed)));
+            k.addProperty("fastKey", HEX.formatHex(RollGenerator.deriveKey(gen.fastId(), seed)));
             k.addProperty("secureKey", HEX.formatHex(RollGenerator.deriveKey(RollGenerator.SECURE_ID, seed)));
             keys.add(k);
-            for (RandomnessMode mode : RandomnessMode.values()) {
-                RollGenerator g = RollGenerator.of(mode, seed);
-                for (long[] c : COUNTERS) {
+            for (String id : new String[] {gen.fastId(), RollGenerator.SECURE_ID}) {
+                RollGenerator g = RollGenerator.of(id, seed);
+                for (long[] c : gen.counters()) {
                     long[] out = new long[4];
                     g.block(c[0], c[1], c[2], c[3], out);
                     JsonObject b = new JsonObject();
@@ -123,7 +144,7 @@ public final class GoldenVectors {
                     b.add("words", hexWords(out));
                     blocks.add(b);
                 }
-                for (BigInteger radix : RADICES) {
+                for (BigInteger radix : gen.radices()) {
                     for (int player = 0; player < 6; player += 5) {
                         final int p = player;
                         JsonObject d = new JsonObject();
@@ -134,7 +155,7 @@ public final class GoldenVectors {
                         d.addProperty("player", p);
                         d.addProperty("digit", 2);
                         d.addProperty("radix", radix.toString());
-                        d.addProperty("value", BoundedSampler.draw(radix, a -> g.word(9, 1, p, 2, a)).toString());
+                        d.addProperty("value", g.digit(9, 1, p, 2, radix).toString());
                         digits.add(d);
                     }
                 }
@@ -147,7 +168,7 @@ public final class GoldenVectors {
                                 continue;
                             }
                             for (long round : ROUNDS) {
-                                rolls.add(roll(mode, seed, setId, word, rule, convention, round));
+                                rolls.add(roll(id, seed, setId, word, rule, convention, round));
                             }
                         }
                     }
@@ -169,8 +190,16 @@ public final class GoldenVectors {
         return a;
     }
 
+    static String text(Generation gen) {
+        return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(generate(gen)) + "\n";
+    }
+
     public static void main(String[] args) throws IOException {
-        String text = new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(generate()) + "\n";
-        SessionLogFiles.writeAtomically(Path.of(args[0]), text);
+        Generation gen = switch (args[0]) {
+            case "v1" -> V1;
+            case "v2" -> V2;
+            default -> throw new IllegalArgumentException("generation must be v1 or v2, got " + args[0]);
+        };
+        SessionLogFiles.writeAtomically(Path.of(args[1]), text(gen));
     }
 }

@@ -2,8 +2,12 @@ package org.precedence.runtime.randomness;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.math.BigInteger;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.util.HexFormat;
@@ -110,10 +114,57 @@ class RollGeneratorTest {
         SessionSeed seed = SessionSeed.fromText("two modes");
         RollGenerator fast = RollGenerator.of(RandomnessMode.FAST, seed);
         RollGenerator secure = RollGenerator.of(RandomnessMode.SECURE, seed);
-        assertEquals("precedence-roll-v1/philox4x64", fast.algorithmId());
+        RollGenerator fastV1 = RollGenerator.of(RollGenerator.FAST_V1_ID, seed);
+        assertEquals("precedence-roll-v2/philox4x64", fast.algorithmId());
+        assertEquals("precedence-roll-v1/philox4x64", fastV1.algorithmId());
         assertEquals("precedence-roll-v1/hmac-sha256", secure.algorithmId());
         assertEquals(RandomnessMode.SECURE, RollGenerator.modeOf(secure.algorithmId()));
+        assertEquals(RandomnessMode.FAST, RollGenerator.modeOf(fastV1.algorithmId()));
+        assertEquals(RandomnessMode.FAST, RollGenerator.modeOf(fast.algorithmId()));
         assertNotEquals(fast.word(0, 0, 0, 0, 0), secure.word(0, 0, 0, 0, 0));
+        // The algorithm id is part of the key, so v1 and v2 never share words either.
+        assertNotEquals(fast.word(0, 0, 0, 0, 0), fastV1.word(0, 0, 0, 0, 0));
+        assertTrue(fast.narrowDraws());
+        assertFalse(fastV1.narrowDraws());
+        assertFalse(secure.narrowDraws());
+    }
+
+    @Test
+    void of_unknownAlgorithm_namesTheKnownOnes() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> RollGenerator.of("precedence-roll-v9/philox4x64", SessionSeed.fromText("x")));
+        assertTrue(e.getMessage().contains("precedence-roll-v9/philox4x64"), e.getMessage());
+        assertTrue(e.getMessage().contains(RollGenerator.FAST_V1_ID), e.getMessage());
+    }
+
+    @Test
+    void chunk_picksWordOfRoundAndBitsOfPlayer() {
+        RollGenerator g = RollGenerator.of(RandomnessMode.FAST, SessionSeed.fromText("chunks"));
+        // Rounds 8..11 of players 4..7 on stream 1, digit 2, attempt 3 share one block.
+        long[] b = block(g, 2, (1L << 32) | (1L << 31) | 1, 2, 3);
+        for (long round = 8; round < 12; round++) {
+            for (int p = 4; p < 8; p++) {
+                long expected = (b[(int) (round - 8)] >>> (16 * (p - 4))) & 0xFFFF;
+                assertEquals(expected, g.chunk(round, 1, p, 2, 3), "round " + round + " player " + p);
+            }
+        }
+        assertEquals((1L << 32) | (1L << 31) | 1, RollGenerator.narrowGroupWord(1, 5));
+    }
+
+    @Test
+    void digit_narrowBelow2To16_wideFrom2To16() {
+        RollGenerator g = RollGenerator.of(RandomnessMode.FAST, SessionSeed.fromText("digit rule"));
+        for (long r = 0; r < 40; r++) {
+            final long round = r;
+            assertEquals(BigInteger.valueOf(g.narrowDigit(round, 0, 3, 1, 120)),
+                    g.digit(round, 0, 3, 1, BigInteger.valueOf(120)));
+            BigInteger wide = BoundedSampler.draw(BigInteger.valueOf(65536), a -> g.word(round, 0, 3, 1, a));
+            assertEquals(wide, g.digit(round, 0, 3, 1, BigInteger.valueOf(65536)));
+            assertEquals(BigInteger.ZERO, g.digit(round, 0, 3, 1, BigInteger.ONE));
+        }
+        RollGenerator v1 = RollGenerator.of(RollGenerator.FAST_V1_ID, SessionSeed.fromText("digit rule"));
+        assertEquals(BoundedSampler.draw(BigInteger.valueOf(6), a -> v1.word(5, 0, 2, 0, a)),
+                v1.digit(5, 0, 2, 0, BigInteger.valueOf(6)));
     }
 
     @Test

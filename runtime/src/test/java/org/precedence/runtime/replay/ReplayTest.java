@@ -20,6 +20,7 @@ import org.precedence.api.SessionSeed;
 import org.precedence.api.SessionSpec;
 import org.precedence.runtime.provider.DiceSession;
 import org.precedence.runtime.provider.TestSets;
+import org.precedence.runtime.randomness.RollGenerator;
 
 class ReplayTest {
     private static final SessionSeed SEED = SessionSeed.fromText("lantern harbour evening");
@@ -149,15 +150,39 @@ class ReplayTest {
         SessionLog log = SessionLogFiles.fromJson(json);
         String face = log.rounds().get(0).faces().get(0);
         assertMalformed(edit(json, "\"" + face + "\"", "\"x" + face + "\""), "must be a decimal number");
-        assertMalformed(edit(json, "\"algorithm\": \"precedence-roll-v1/philox4x64\"", "\"algorithm\": 7"),
+        assertMalformed(edit(json, "\"algorithm\": \"precedence-roll-v2/philox4x64\"", "\"algorithm\": 7"),
                 "'algorithm' must be a string");
+    }
+
+    @Test
+    void replay_v1LogReplaysWithV1AndIsNotAV2Log() {
+        for (OrderRule rule : OrderRule.values()) {
+            DiceSession v1 = DiceSession.open(new SessionSpec(SEED, RandomnessMode.FAST, rule,
+                    RankingConvention.LOWEST_FIRST), TestSets.INSTANCE, RollGenerator.FAST_V1_ID);
+            SessionRecorder recorder = new SessionRecorder(v1);
+            for (long k = 0; k < 8; k++) {
+                recorder.play(k, List.of("Quill", "Bramble", "Tamsin"));
+            }
+            SessionLog log = SessionLogFiles.fromJson(SessionLogFiles.toJson(recorder.log(true)));
+            assertEquals(RollGenerator.FAST_V1_ID, log.algorithm());
+            ReplayReport report = REPLAYER.verify(log, Optional.empty());
+            assertTrue(report.ok(), () -> report.mismatch().get().describe());
+            assertEquals(8, report.roundsChecked());
+            // The same log relabelled as v2 no longer matches: the id really selects the algorithm.
+            SessionLog relabelled = SessionLogFiles.fromJson(SessionLogFiles.toJson(recorder.log(true))
+                    .replace(RollGenerator.FAST_V1_ID, RollGenerator.FAST_ID));
+            assertFalse(REPLAYER.verify(relabelled, Optional.empty()).ok(), rule.toString());
+        }
     }
 
     @Test
     void verify_rejectsUnknownAlgorithmAndBadSizes() {
         String json = SessionLogFiles.toJson(recorded(RandomnessMode.FAST, OrderRule.FRESH_EACH_ROUND));
-        SessionLog unknown = SessionLogFiles.fromJson(edit(json, "precedence-roll-v1/philox4x64", "precedence-roll-v9/x"));
-        assertThrows(MalformedLogException.class, () -> REPLAYER.verify(unknown, Optional.empty()));
+        SessionLog unknown = SessionLogFiles.fromJson(edit(json, "precedence-roll-v2/philox4x64", "precedence-roll-v9/x"));
+        MalformedLogException bad = assertThrows(MalformedLogException.class,
+                () -> REPLAYER.verify(unknown, Optional.empty()));
+        assertTrue(bad.getMessage().contains("unknown algorithm 'precedence-roll-v9/x'"), bad.getMessage());
+        assertTrue(bad.getMessage().contains(RollGenerator.FAST_V1_ID), bad.getMessage());
         SessionLog shortRoster = SessionLogFiles.fromJson(edit(json, "\"Quill\",", ""));
         MalformedLogException e = assertThrows(MalformedLogException.class,
                 () -> REPLAYER.verify(shortRoster, Optional.empty()));
