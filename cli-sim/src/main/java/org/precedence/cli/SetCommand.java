@@ -117,9 +117,20 @@ final class SetCommand implements Callable<Integer> {
         } else {
             v.put("kind", "family proof");
             v.put("rankings", rankings.toString());
-            v.put("allEqual", true);
-            v.put("detail", "each level's family proven uniform on ordered tuples of the length it"
-                    + " lifts to (see families); the level argument then gives subset depth " + n);
+            // Run every level's proof now: it throws when a family is not uniform on the tuples
+            // its level needs, and then the set is reported as unproven (exit 1), not fair.
+            boolean proven;
+            String detail;
+            try {
+                proven = dice.proofs().size() == dice.construction().levels().size();
+                detail = "each level's family proven uniform on ordered tuples of the length it"
+                        + " lifts to (see families); the level argument then gives subset depth " + n;
+            } catch (IllegalStateException | ArithmeticException e) {
+                proven = false;
+                detail = "a family proof failed: " + e.getMessage();
+            }
+            v.put("allEqual", proven);
+            v.put("detail", detail);
         }
         return v;
     }
