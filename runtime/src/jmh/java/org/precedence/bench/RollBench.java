@@ -1,5 +1,6 @@
 package org.precedence.bench;
 
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -49,6 +50,7 @@ public class RollBench {
     private DiceSession session;
     private final int[] out = new int[16];
     private final long[] faces = new long[16];
+    private final BigInteger[] bigFaces = new BigInteger[16];
     private List<Integer> list4;
     private List<Integer> list10;
     private Random random;
@@ -134,6 +136,17 @@ public class RollBench {
     public void fastConstructed10(Blackhole bh) {
         fast.orderInto(nextRound(), 10, out);
         bh.consume(out);
+    }
+
+    /**
+     * Fast mode, 10 players, the construction's set with faces: the order and every player's
+     * exact face value (a BigInteger, as DiceSession.roll reports it).
+     */
+    @Benchmark
+    public void fastConstructedWithFaces10(Blackhole bh) {
+        fast.orderInto(nextRound(), 10, out, bigFaces);
+        bh.consume(out);
+        bh.consume(bigFaces);
     }
 
     /** Round 1 and round 10^9 cost the same: counter-based, no stepping (rounds 1/2 vs 10^9/10^9+1). */

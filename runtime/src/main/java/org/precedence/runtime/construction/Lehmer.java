@@ -40,6 +40,60 @@ final class Lehmer {
         }
     }
 
+    /** {@code FACTORIAL[k] = k!} for k ≤ 20 (the largest that fits a long). */
+    private static final long[] FACTORIAL = new long[21];
+
+    static {
+        FACTORIAL[0] = 1;
+        for (int k = 1; k < FACTORIAL.length; k++) {
+            FACTORIAL[k] = FACTORIAL[k - 1] * k;
+        }
+    }
+
+    /** Returns whether {@link #preimage} serves n points (n! fits a long). */
+    static boolean preimageServes(int n) {
+        return n < FACTORIAL.length;
+    }
+
+    /**
+     * Returns the point j with π(j) = {@code letter} for the permutation of Lehmer index
+     * {@code index} (n ≤ 20), decoding digits from the top only until j is found; with
+     * {@code evenCode}, digit n−2 is replaced by the parity of the digits before it (the
+     * coding of {@link AlternatingFamily}, whose member i has index 2i). The unused values
+     * are a bit mask, and the digits come from dividing by factorials (32-bit once the rest
+     * fits, the common case).
+     */
+    static int preimage(long index, int n, int letter, boolean evenCode) {
+        if (index < 0 || index >= FACTORIAL[n]) {
+            throw new IndexOutOfBoundsException("index " + index + " is not below " + n + "!");
+        }
+        long free = (1L << n) - 1;
+        long rest = index;
+        int sum = 0;
+        for (int j = 0; j < n; j++) {
+            int c;
+            if (evenCode && j == n - 2) {
+                c = sum & 1;
+            } else {
+                long f = FACTORIAL[n - 1 - j];
+                // f ≤ rest ≤ 2^31 − 1 makes the 32-bit division exact.
+                c = rest < f ? 0 : rest <= Integer.MAX_VALUE ? (int) rest / (int) f : (int) (rest / f);
+                rest -= c * f;
+            }
+            sum += c;
+            long m = free;
+            for (; c > 0; c--) {
+                m &= m - 1;
+            }
+            int value = Long.numberOfTrailingZeros(m);
+            if (value == letter) {
+                return j;
+            }
+            free &= ~(1L << value);
+        }
+        throw new IllegalArgumentException("letter " + letter + " is not below " + n);
+    }
+
     /** Decodes a Lehmer code into {@code out} (out[j] = image of point j). */
     static void decode(int[] code, int n, int[] out) {
         // Values still free, kept sorted; n ≤ a few hundred, so the quadratic shift is cheaper
