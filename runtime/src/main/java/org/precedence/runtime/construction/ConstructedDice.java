@@ -32,6 +32,8 @@ public final class ConstructedDice implements MixedRadixDice {
     private final boolean startDigit;
     /** Radices as longs when every one is below 2^62, else null (no long face path). */
     private final long[] longRadix;
+    /** {@code flushBefore[j]}: the long face path starts a new 62-bit chunk at digit j. */
+    private final boolean[] flushBefore;
     /** Limbs (64-bit, least significant first) enough for any face value. */
     private final int limbs;
     private volatile List<FamilyProof> proofs;
@@ -70,6 +72,15 @@ public final class ConstructedDice implements MixedRadixDice {
             lr[j] = radix[j].longValue();
         }
         this.longRadix = fits ? lr : null;
+        this.flushBefore = new boolean[l];
+        long chunkProduct = 1;
+        for (int j = 0; j < l && fits; j++) {
+            if (Long.MAX_VALUE / lr[j] <= chunkProduct) {
+                flushBefore[j] = true;
+                chunkProduct = 1;
+            }
+            chunkProduct *= lr[j];
+        }
         this.limbs = construction.sidesPerDie().multiply(BigInteger.valueOf(players)).bitLength() / 64 + 1;
         int[] letters = construction.start().word().letters();
         this.startPosition = new int[players][m];
@@ -274,7 +285,7 @@ public final class ConstructedDice implements MixedRadixDice {
             if (d < 0 || d >= r) {
                 throw new IllegalArgumentException("digit " + j + " must be in 0.." + (r - 1) + ", got " + d);
             }
-            if (Long.MAX_VALUE / r <= chunkRadix) {
+            if (flushBefore[j]) {
                 mulAdd(limbs, chunkRadix, chunk);
                 chunk = 0;
                 chunkRadix = 1;

@@ -30,6 +30,16 @@ final class PrefixRanker {
     private final long[][] digits;
     private final long[] keys;
     private final long[] block = new long[RollGenerator.LANES];
+    /** The draw whose leading digits {@code digits[·][0..prefix)} hold (stream −1: none yet). */
+    private int drawnStream = -1;
+    private long drawnIndex;
+    /**
+     * Narrow blocks kept per (digit, lane group): they serve four consecutive indices, so
+     * rounds asked in order draw each once per four rounds. {@code narrowC0} is c0 + 1 of
+     * the kept block (0: none).
+     */
+    private final long[][] narrowWords;
+    private final long[] narrowC0;
     private final int[] letters;
     private final long[] limbs;
 
@@ -46,6 +56,9 @@ final class PrefixRanker {
         this.narrowDraws = narrowDraws;
         this.digits = new long[players][radix.length];
         this.keys = new long[players];
+        int groups = (players + RollGenerator.LANES - 1) / RollGenerator.LANES;
+        this.narrowWords = new long[prefix * groups][RollGenerator.LANES];
+        this.narrowC0 = new long[prefix * groups];
         this.letters = new int[players];
         this.limbs = new long[dice.faceLimbs()];
     }
@@ -57,6 +70,8 @@ final class PrefixRanker {
         for (int j = 0; j < prefix; j++) {
             drawDigit(generator, cursor, stream, index, j);
         }
+        drawnStream = stream;
+        drawnIndex = index;
         long[] k = keys;
         for (int d = 0; d < n; d++) {
             k[d] = dice.prefixKey(digits[d], prefix);
@@ -86,14 +101,16 @@ final class PrefixRanker {
      */
     void facesInto(RollGenerator generator, BlockCursor cursor, int stream, long index, BigInteger[] faces) {
         int m = radix.length;
-        for (int j = 0; j < m; j++) {
+        // The leading digits are kept from the ranking of the same draw (the usual case).
+        int first = drawnStream == stream && drawnIndex == index ? prefix : 0;
+        for (int j = first; j < m; j++) {
             if (radix[j] == 0) {
                 // A digit of 2^63 or more: the general draw (no served set has one today).
                 for (int d = 0; d < players; d++) {
                     digits[d][j] = -1;
                 }
             } else {
-                drawDigit(generator, cursor, stream, index, j);
+                drawDigit(generator, null, stream, index, j);
             }
         }
         if (dice.hasLongDigits()) {
@@ -113,7 +130,12 @@ final class PrefixRanker {
         }
     }
 
-    /** Draws digit {@code j} of every die into {@code digits[d][j]}, one block per lane group. */
+    /**
+     * Draws digit {@code j} of every die into {@code digits[d][j]}, one block per lane group,
+     * through {@code cursor} (which keeps a few counters stepping: the leading digits of rounds
+     * in order) or, when it is null, straight from the generator (all digits: more counters
+     * than the cursor keeps).
+     */
     private void drawDigit(RollGenerator generator, BlockCursor cursor, int stream, long index, int j) {
         long r = radix[j];
         int n = players;
@@ -124,10 +146,10 @@ final class PrefixRanker {
         } else if (narrowDraws && r < RollGenerator.NARROW_LIMIT) {
             int ri = (int) r;
             for (int g = 0; g < n; g += RollGenerator.LANES) {
-                cursor.block(index >>> 2, RollGenerator.narrowGroupWord(stream, g), j, 0, block);
+                long[] words = narrowBlock(generator, cursor, stream, index, g, j);
                 int end = Math.min(n, g + RollGenerator.LANES);
                 for (int d = g; d < end; d++) {
-                    int v = BoundedSampler.lemire16(RollGenerator.chunkOf(block, index, d), ri);
+                    int v = BoundedSampler.lemire16(RollGenerator.chunkOf(words, index, d), ri);
                     if (v == BoundedSampler.REJECTED) {
                         v = generator.narrowDigit(index, stream, d, j, ri); // attempt 0 again, then 1, 2, …
                     }
@@ -136,7 +158,7 @@ final class PrefixRanker {
             }
         } else {
             for (int g = 0; g < n; g += RollGenerator.LANES) {
-                cursor.block(index, RollGenerator.groupWord(stream, g), j, 0, block);
+                block(generator, cursor, index, RollGenerator.groupWord(stream, g), j);
                 int end = Math.min(n, g + RollGenerator.LANES);
                 for (int d = g; d < end; d++) {
                     long v = BoundedSampler.lemire64(block[d & 3], r);
@@ -146,6 +168,35 @@ final class PrefixRanker {
                     digits[d][j] = v;
                 }
             }
+        }
+    }
+
+    /**
+     * The narrow block of lane group {@code g} for digit {@code j}; blocks of the leading digits
+     * on stream 0 are kept per (digit, group) and reused while c0 = index / 4 stays the same.
+     */
+    private long[] narrowBlock(RollGenerator generator, BlockCursor cursor, int stream, long index, int g, int j) {
+        long c0 = index >>> 2;
+        long c1 = RollGenerator.narrowGroupWord(stream, g);
+        if (j >= prefix || stream != Streams.ROUND) {
+            block(generator, cursor, c0, c1, j);
+            return block;
+        }
+        int kept = j * (narrowWords.length / prefix) + (g >>> 2);
+        long[] words = narrowWords[kept];
+        if (narrowC0[kept] != c0 + 1) {
+            block(generator, cursor, c0, c1, j);
+            System.arraycopy(block, 0, words, 0, RollGenerator.LANES);
+            narrowC0[kept] = c0 + 1;
+        }
+        return words;
+    }
+
+    private void block(RollGenerator generator, BlockCursor cursor, long c0, long c1, int digit) {
+        if (cursor != null) {
+            cursor.block(c0, c1, digit, 0, block);
+        } else {
+            generator.block(c0, c1, digit, 0, block);
         }
     }
 }
