@@ -113,6 +113,12 @@ public class RollBench {
         return session.roll(nextRound(), 4);
     }
 
+    /** Fast mode, 10 players, the general path: a full RoundResult with the construction's BigInteger faces. */
+    @Benchmark
+    public RoundResult roundResult10() {
+        return session.roll(nextRound(), 10);
+    }
+
     /** Secure mode (HMAC-SHA256), 4 players, same path as fastWithFaces4. */
     @Benchmark
     public void secureWithFaces4(Blackhole bh) {

@@ -30,6 +30,8 @@ public final class ConstructedDice implements MixedRadixDice {
     /** Start word position of each face: {@code startPosition[letter][face]}, 0-based. */
     private final int[][] startPosition;
     private final boolean startDigit;
+    /** Each radix as a long, or 0 when it is 2^63 or more (prefix keys never reach those). */
+    private final long[] radixLong;
     /** Radices as longs when every one is below 2^62, else null (no long face path). */
     private final long[] longRadix;
     /** {@code flushBefore[j]}: the long face path starts a new 62-bit chunk at digit j. */
@@ -72,6 +74,10 @@ public final class ConstructedDice implements MixedRadixDice {
             lr[j] = radix[j].longValue();
         }
         this.longRadix = fits ? lr : null;
+        this.radixLong = new long[radix.length];
+        for (int j = 0; j < radix.length; j++) {
+            radixLong[j] = radix[j].bitLength() < 63 ? radix[j].longValue() : 0;
+        }
         this.flushBefore = new boolean[l];
         long chunkProduct = 1;
         for (int j = 0; j < l && fits; j++) {
@@ -237,7 +243,7 @@ public final class ConstructedDice implements MixedRadixDice {
         long key = 0;
         boolean negative = false;
         for (int j = 0; j < k; j++) {
-            long r = radix[j].longValue();
+            long r = radixLong[j];
             long d = digits[j];
             // A reversed enclosing block reads its sub-blocks from the last to the first.
             key = key * r + (negative ? r - 1 - d : d);
