@@ -149,7 +149,7 @@ public final class FastOrders implements Ranker {
         }
         PrefixRanker ranker = prefix[players];
         if (ranker != null) {
-            ranker.facesInto(generator, cursor, Streams.ROUND, Streams.facesIndex(rule, round), faces);
+            ranker.facesInto(generator, Streams.ROUND, Streams.facesIndex(rule, round), faces);
             return;
         }
         if (sets[players] instanceof ExplicitDice) {

@@ -68,7 +68,7 @@ final class PrefixRanker {
             long index, int[] out) {
         int n = players;
         for (int j = 0; j < prefix; j++) {
-            drawDigit(generator, cursor, stream, index, j);
+            drawDigit(generator, stream, index, j);
         }
         drawnStream = stream;
         drawnIndex = index;
@@ -99,7 +99,7 @@ final class PrefixRanker {
      * Writes the exact face values of draw (stream, index) into {@code faces}: every digit
      * drawn as here, evaluated by {@link ConstructedDice#faceValue}.
      */
-    void facesInto(RollGenerator generator, BlockCursor cursor, int stream, long index, BigInteger[] faces) {
+    void facesInto(RollGenerator generator, int stream, long index, BigInteger[] faces) {
         int m = radix.length;
         // The leading digits are kept from the ranking of the same draw (the usual case).
         int first = drawnStream == stream && drawnIndex == index ? prefix : 0;
@@ -110,7 +110,7 @@ final class PrefixRanker {
                     digits[d][j] = -1;
                 }
             } else {
-                drawDigit(generator, null, stream, index, j);
+                drawDigit(generator, stream, index, j);
             }
         }
         if (dice.hasLongDigits()) {
@@ -132,11 +132,9 @@ final class PrefixRanker {
 
     /**
      * Draws digit {@code j} of every die into {@code digits[d][j]}, one block per lane group,
-     * through {@code cursor} (which keeps a few counters stepping: the leading digits of rounds
-     * in order) or, when it is null, straight from the generator (all digits: more counters
-     * than the cursor keeps).
+     * straight from the generator (measured faster here than stepping a cursor's kept streams).
      */
-    private void drawDigit(RollGenerator generator, BlockCursor cursor, int stream, long index, int j) {
+    private void drawDigit(RollGenerator generator, int stream, long index, int j) {
         long r = radix[j];
         int n = players;
         if (r == 1) {
@@ -146,7 +144,7 @@ final class PrefixRanker {
         } else if (narrowDraws && r < RollGenerator.NARROW_LIMIT) {
             int ri = (int) r;
             for (int g = 0; g < n; g += RollGenerator.LANES) {
-                long[] words = narrowBlock(generator, cursor, stream, index, g, j);
+                long[] words = narrowBlock(generator, stream, index, g, j);
                 int end = Math.min(n, g + RollGenerator.LANES);
                 for (int d = g; d < end; d++) {
                     int v = BoundedSampler.lemire16(RollGenerator.chunkOf(words, index, d), ri);
@@ -158,7 +156,7 @@ final class PrefixRanker {
             }
         } else {
             for (int g = 0; g < n; g += RollGenerator.LANES) {
-                block(generator, cursor, index, RollGenerator.groupWord(stream, g), j);
+                generator.block(index, RollGenerator.groupWord(stream, g), j, 0, block);
                 int end = Math.min(n, g + RollGenerator.LANES);
                 for (int d = g; d < end; d++) {
                     long v = BoundedSampler.lemire64(block[d & 3], r);
@@ -175,28 +173,20 @@ final class PrefixRanker {
      * The narrow block of lane group {@code g} for digit {@code j}; blocks of the leading digits
      * on stream 0 are kept per (digit, group) and reused while c0 = index / 4 stays the same.
      */
-    private long[] narrowBlock(RollGenerator generator, BlockCursor cursor, int stream, long index, int g, int j) {
+    private long[] narrowBlock(RollGenerator generator, int stream, long index, int g, int j) {
         long c0 = index >>> 2;
         long c1 = RollGenerator.narrowGroupWord(stream, g);
         if (j >= prefix || stream != Streams.ROUND) {
-            block(generator, cursor, c0, c1, j);
+            generator.block(c0, c1, j, 0, block);
             return block;
         }
         int kept = j * (narrowWords.length / prefix) + (g >>> 2);
         long[] words = narrowWords[kept];
         if (narrowC0[kept] != c0 + 1) {
-            block(generator, cursor, c0, c1, j);
+            generator.block(c0, c1, j, 0, block);
             System.arraycopy(block, 0, words, 0, RollGenerator.LANES);
             narrowC0[kept] = c0 + 1;
         }
         return words;
-    }
-
-    private void block(RollGenerator generator, BlockCursor cursor, long c0, long c1, int digit) {
-        if (cursor != null) {
-            cursor.block(c0, c1, digit, 0, block);
-        } else {
-            generator.block(c0, c1, digit, 0, block);
-        }
     }
 }
