@@ -28,8 +28,9 @@ import org.precedence.runtime.randomness.SeededFaces;
  * <p>Allocation: none for explicit sets in fast mode when rounds are asked in increasing order
  * (the usual simulation loop: the Philox generator of each lane is stepped); a jump to another
  * block builds one library generator (48 bytes); secure mode allocates the JDK's 32-byte MAC
- * result per block; constructed sets allocate nothing unless two dice tie on their leading digits (the lazy
- * comparison then allocates its memo), and their exact faces are BigIntegers.
+ * result per block; constructed sets allocate what their blocks' library generators need (about
+ * 180 bytes per 10-player round, JMH {@code -prof gc}), the lazy comparison's memo when two dice
+ * tie on their leading digits, and one BigInteger per exact face.
  *
  * <p>Not thread-safe: it owns scratch arrays. Create one per thread ({@link
  * DiceSession#fastOrders()} is cheap).
