@@ -1,5 +1,6 @@
 package org.precedence.bench;
 
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -49,6 +50,7 @@ public class RollBench {
     private DiceSession session;
     private final int[] out = new int[16];
     private final long[] faces = new long[16];
+    private final BigInteger[] bigFaces = new BigInteger[16];
     private List<Integer> list4;
     private List<Integer> list10;
     private Random random;
@@ -111,6 +113,12 @@ public class RollBench {
         return session.roll(nextRound(), 4);
     }
 
+    /** Fast mode, 10 players, the general path: a full RoundResult with the construction's BigInteger faces. */
+    @Benchmark
+    public RoundResult roundResult10() {
+        return session.roll(nextRound(), 10);
+    }
+
     /** Secure mode (HMAC-SHA256), 4 players, same path as fastWithFaces4. */
     @Benchmark
     public void secureWithFaces4(Blackhole bh) {
@@ -134,6 +142,17 @@ public class RollBench {
     public void fastConstructed10(Blackhole bh) {
         fast.orderInto(nextRound(), 10, out);
         bh.consume(out);
+    }
+
+    /**
+     * Fast mode, 10 players, the construction's set with faces: the order and every player's
+     * exact face value (a BigInteger, as DiceSession.roll reports it).
+     */
+    @Benchmark
+    public void fastConstructedWithFaces10(Blackhole bh) {
+        fast.orderInto(nextRound(), 10, out, bigFaces);
+        bh.consume(out);
+        bh.consume(bigFaces);
     }
 
     /** Round 1 and round 10^9 cost the same: counter-based, no stepping (rounds 1/2 vs 10^9/10^9+1). */

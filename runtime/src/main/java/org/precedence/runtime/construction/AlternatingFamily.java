@@ -57,6 +57,14 @@ final class AlternatingFamily implements PermutationFamily {
         Lehmer.decode(code, n, out);
     }
 
+    @Override
+    public int preimage(long index, int letter, int[] scratch) {
+        if (!Lehmer.preimageServes(n) || index < 0 || index > Long.MAX_VALUE >> 1) {
+            return PermutationFamily.super.preimage(index, letter, scratch);
+        }
+        return Lehmer.preimage(index << 1, n, letter, true);
+    }
+
     /** Returns the member index of an even permutation. */
     static BigInteger indexOf(int[] even) {
         return Lehmer.rank(even).shiftRight(1);

@@ -30,6 +30,14 @@ public final class ConstructedDice implements MixedRadixDice {
     /** Start word position of each face: {@code startPosition[letter][face]}, 0-based. */
     private final int[][] startPosition;
     private final boolean startDigit;
+    /** Each radix as a long, or 0 when it is 2^63 or more (prefix keys never reach those). */
+    private final long[] radixLong;
+    /** Radices as longs when every one is below 2^62, else null (no long face path). */
+    private final long[] longRadix;
+    /** {@code flushBefore[j]}: the long face path starts a new 62-bit chunk at digit j. */
+    private final boolean[] flushBefore;
+    /** Limbs (64-bit, least significant first) enough for any face value. */
+    private final int limbs;
     private volatile List<FamilyProof> proofs;
 
     /**
@@ -59,6 +67,27 @@ public final class ConstructedDice implements MixedRadixDice {
         if (startDigit) {
             radix[l] = BigInteger.valueOf(m);
         }
+        long[] lr = new long[radix.length];
+        boolean fits = true;
+        for (int j = 0; j < radix.length; j++) {
+            fits &= radix[j].bitLength() < 62;
+            lr[j] = radix[j].longValue();
+        }
+        this.longRadix = fits ? lr : null;
+        this.radixLong = new long[radix.length];
+        for (int j = 0; j < radix.length; j++) {
+            radixLong[j] = radix[j].bitLength() < 63 ? radix[j].longValue() : 0;
+        }
+        this.flushBefore = new boolean[l];
+        long chunkProduct = 1;
+        for (int j = 0; j < l && fits; j++) {
+            if (Long.MAX_VALUE / lr[j] <= chunkProduct) {
+                flushBefore[j] = true;
+                chunkProduct = 1;
+            }
+            chunkProduct *= lr[j];
+        }
+        this.limbs = construction.sidesPerDie().multiply(BigInteger.valueOf(players)).bitLength() / 64 + 1;
         int[] letters = construction.start().word().letters();
         this.startPosition = new int[players][m];
         int[] next = new int[players];
@@ -177,6 +206,137 @@ public final class ConstructedDice implements MixedRadixDice {
             c = Integer.compare(startPosition[la][0], startPosition[lb][0]);
         }
         return flipped ? -c : c;
+    }
+
+    /**
+     * Returns how many leading digits the fast ranking draws for every die: the fewest whose
+     * radices multiply to at least 2^{@code minBits} (or as many as keep the product below
+     * 2^62, if fewer), at least one.
+     */
+    public int prefixDigits(int minBits) {
+        BigInteger limit = BigInteger.ONE.shiftLeft(62);
+        BigInteger wanted = BigInteger.ONE.shiftLeft(minBits);
+        BigInteger product = BigInteger.ONE;
+        int k = 0;
+        while (k < byDigit.length) {
+            BigInteger next = product.multiply(radix[k]);
+            if (next.compareTo(limit) >= 0) {
+                break;
+            }
+            product = next;
+            k++;
+            if (product.compareTo(wanted) >= 0) {
+                break;
+            }
+        }
+        return Math.max(k, 1);
+    }
+
+    /**
+     * Returns the prefix key of a face's first {@code k} digits ({@code k ≤ }{@link
+     * #prefixDigits}): the rank, in value order, of the sub-block of the word those digits
+     * select. Faces with different keys compare as their keys do ({@link #compare} would
+     * decide them within these digits, since relabelling only matters at the bottom); equal
+     * keys leave the comparison to the later digits.
+     */
+    public long prefixKey(long[] digits, int k) {
+        long key = 0;
+        boolean negative = false;
+        for (int j = 0; j < k; j++) {
+            long r = radixLong[j];
+            long d = digits[j];
+            // A reversed enclosing block reads its sub-blocks from the last to the first.
+            key = key * r + (negative ? r - 1 - d : d);
+            if (byDigit[j].reversed(d)) {
+                negative = !negative;
+            }
+        }
+        return key;
+    }
+
+    /** Returns whether {@link #faceValue(int, long[], int[], long[])} serves this set (every radix below 2^62). */
+    public boolean hasLongDigits() {
+        return longRadix != null;
+    }
+
+    /** Returns how many longs the {@code limbs} scratch of the long face path needs. */
+    public int faceLimbs() {
+        return limbs;
+    }
+
+    /**
+     * Returns what {@link #faceValue(int, BigInteger[])} returns for the same digits, computed
+     * on longs: the value is the mixed-radix number of the digits with every digit below a
+     * reversed block read backwards (d ↦ radix − 1 − d), times the start word's length, plus
+     * the letter's position in the start word (also read backwards under an odd number of
+     * reversals), plus one. Scratch: {@code letters} of at least {@link #players()} ints,
+     * {@code limbs} of at least {@link #faceLimbs()} longs.
+     *
+     * @throws IllegalStateException if the set has a radix of 2^62 or more ({@link #hasLongDigits()})
+     */
+    public BigInteger faceValue(int die, long[] digits, int[] letters, long[] limbs) {
+        checkDie(die);
+        if (longRadix == null) {
+            throw new IllegalStateException(id() + " has digits of 2^62 or more");
+        }
+        java.util.Arrays.fill(limbs, 0, this.limbs, 0);
+        boolean negative = false;
+        int letter = die;
+        int l = byDigit.length;
+        long chunk = 0;
+        long chunkRadix = 1;
+        for (int j = 0; j < l; j++) {
+            long r = longRadix[j];
+            long d = digits[j];
+            if (d < 0 || d >= r) {
+                throw new IllegalArgumentException("digit " + j + " must be in 0.." + (r - 1) + ", got " + d);
+            }
+            if (flushBefore[j]) {
+                mulAdd(limbs, chunkRadix, chunk);
+                chunk = 0;
+                chunkRadix = 1;
+            }
+            chunk = chunk * r + (negative ? r - 1 - d : d);
+            chunkRadix *= r;
+            Level level = byDigit[j];
+            if (level.reversed(d)) {
+                negative = !negative;
+            }
+            letter = level.preimage(d, letter, letters);
+        }
+        mulAdd(limbs, chunkRadix, chunk);
+        int m = startPosition[0].length;
+        int face = startDigit ? Math.toIntExact(digits[l]) : 0;
+        if (face < 0 || face >= m) {
+            throw new IllegalArgumentException("digit " + l + " must be in 0.." + (m - 1) + ", got " + face);
+        }
+        long length = (long) players * m;
+        long inner = startPosition[letter][face];
+        mulAdd(limbs, length, (negative ? length - 1 - inner : inner) + 1);
+        byte[] bytes = new byte[this.limbs * 8];
+        for (int i = 0; i < this.limbs; i++) {
+            long w = limbs[i];
+            for (int b = 0; b < 8; b++) {
+                bytes[bytes.length - 1 - (i * 8 + b)] = (byte) (w >>> (8 * b));
+            }
+        }
+        return new BigInteger(1, bytes);
+    }
+
+    /** {@code limbs ← limbs · factor + addend} on unsigned 64-bit limbs (factor, addend ≥ 0). */
+    private void mulAdd(long[] x, long factor, long addend) {
+        long carry = addend;
+        for (int i = 0; i < limbs; i++) {
+            long lo = x[i] * factor;
+            long hi = Math.multiplyHigh(x[i], factor) + ((x[i] >> 63) & factor);
+            long sum = lo + carry;
+            hi += Long.compareUnsigned(sum, lo) < 0 ? 1 : 0;
+            x[i] = sum;
+            carry = hi;
+        }
+        if (carry != 0) {
+            throw new IllegalStateException("face value overflows " + limbs + " limbs");
+        }
     }
 
     @Override

@@ -40,6 +40,83 @@ final class Lehmer {
         }
     }
 
+    /** {@code FACTORIAL[k] = k!} for k ≤ 20 (the largest that fits a long). */
+    private static final long[] FACTORIAL = new long[21];
+    /** {@code 1 / k!} in double precision: a digit is a multiply and at most one correction. */
+    private static final double[] INVERSE_FACTORIAL = new double[21];
+
+    static {
+        FACTORIAL[0] = 1;
+        for (int k = 1; k < FACTORIAL.length; k++) {
+            FACTORIAL[k] = FACTORIAL[k - 1] * k;
+        }
+        for (int k = 0; k < FACTORIAL.length; k++) {
+            INVERSE_FACTORIAL[k] = 1.0 / FACTORIAL[k];
+        }
+    }
+
+    /** Returns whether {@link #preimage} serves n points (n! fits a long). */
+    static boolean preimageServes(int n) {
+        return n < FACTORIAL.length;
+    }
+
+    /**
+     * Returns the point j with π(j) = {@code letter} for the permutation of Lehmer index
+     * {@code index} (n ≤ 20), reading digits from the top only until j is found; with
+     * {@code evenCode}, digit n−2 is replaced by the parity of the digits before it (the
+     * coding of {@link AlternatingFamily}, whose member i has index 2i).
+     *
+     * <p>Why no decoding: π(j) = letter exactly when digit c_j equals the rank of the letter
+     * among the values still unused, and that rank drops by one each time an earlier digit
+     * picks a smaller value (c_j below it). Digit j is q_j − (n−j)·q_{j−1} with
+     * q_j = ⌊index / (n−1−j)!⌋, and each q_j is computed on its own (a floating-point estimate
+     * corrected exactly), so the steps do not wait on each other.
+     */
+    static int preimage(long index, int n, int letter, boolean evenCode) {
+        if (index < 0 || index >= FACTORIAL[n]) {
+            throw new IndexOutOfBoundsException("index " + index + " is not below " + n + "!");
+        }
+        if (letter < 0 || letter >= n) {
+            throw new IllegalArgumentException("letter " + letter + " is not below " + n);
+        }
+        int rank = letter;
+        long previous = 0;
+        int sum = 0;
+        for (int j = 0; j < n; j++) {
+            long q = quotient(index, n - 1 - j);
+            int c = (int) (q - (n - j) * previous);
+            previous = q;
+            if (evenCode && j == n - 2) {
+                c = sum & 1;
+            }
+            sum += c;
+            if (c == rank) {
+                return j;
+            }
+            if (c < rank) {
+                rank--;
+            }
+        }
+        throw new IllegalStateException("index " + index + " does not code a permutation of " + n);
+    }
+
+    /** Returns ⌊index / k!⌋ exactly (0 ≤ index &lt; 2^63). */
+    private static long quotient(long index, int k) {
+        long f = FACTORIAL[k];
+        if (index >= 1L << 52) {
+            return index / f;
+        }
+        // Below 2^52 the estimate is off by at most one.
+        long q = (long) (index * INVERSE_FACTORIAL[k]);
+        long r = index - q * f;
+        if (r < 0) {
+            q--;
+        } else if (r >= f) {
+            q++;
+        }
+        return q;
+    }
+
     /** Decodes a Lehmer code into {@code out} (out[j] = image of point j). */
     static void decode(int[] code, int n, int[] out) {
         // Values still free, kept sorted; n ≤ a few hundred, so the quadratic shift is cheaper

@@ -170,6 +170,14 @@ public final class Level {
         return family == null && block.signum() != 0;
     }
 
+    /** As {@link #reversed(BigInteger)} for a block index that fits a long. */
+    boolean reversed(long block) {
+        if (listed != null) {
+            return listedReversed[Math.toIntExact(block)];
+        }
+        return family == null && block != 0;
+    }
+
     /**
      * Writes block {@code block}'s relabelling into {@code out} (out[x] = new letter of x), or
      * returns false when the block keeps the letters.
@@ -184,6 +192,27 @@ public final class Level {
         }
         family.member(block, out);
         return true;
+    }
+
+    /**
+     * Returns the letter that block {@code block}'s relabelling sends to {@code letter} (the
+     * letter itself when the block keeps the letters); {@code scratch} holds at least
+     * {@link #points()} ints.
+     */
+    int preimage(long block, int letter, int[] scratch) {
+        if (listed != null) {
+            int[] sigma = listed[Math.toIntExact(block)];
+            for (int x = 0; x < points; x++) {
+                if (sigma[x] == letter) {
+                    return x;
+                }
+            }
+            throw new IllegalStateException(listedName + ": block " + block + " is not a permutation");
+        }
+        if (family == null) {
+            return letter;
+        }
+        return family.preimage(block, letter, scratch);
     }
 
     /** Returns (once per family) what was checked about this level's relabellings. */

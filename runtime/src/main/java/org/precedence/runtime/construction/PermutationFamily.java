@@ -36,6 +36,22 @@ public interface PermutationFamily {
      */
     void member(BigInteger index, int[] out);
 
+    /**
+     * Returns the point that member {@code index} maps to {@code letter} (the preimage),
+     * using {@code scratch} (at least {@link #points()} long) as working space.
+     *
+     * @throws IndexOutOfBoundsException if the index is outside {@code 0..order()-1}
+     */
+    default int preimage(long index, int letter, int[] scratch) {
+        member(BigInteger.valueOf(index), scratch);
+        for (int x = 0; x < points(); x++) {
+            if (scratch[x] == letter) {
+                return x;
+            }
+        }
+        throw new IllegalStateException(name() + ": member " + index + " is not a permutation");
+    }
+
     /** Returns member {@code index} as a new array. */
     default int[] member(BigInteger index) {
         int[] out = new int[points()];

@@ -13,6 +13,11 @@ final class ProjectiveFamily implements PermutationFamily {
     private final GaloisField field;
     private final int q;
     private final int infinity;
+    /**
+     * {@code inverse[i·(q+1) + y]}: the point member i sends to y, built on first use (about
+     * 10^4 entries for the served fields); racy but safe, each thread builds the same table.
+     */
+    private volatile byte[] inverse;
     /** The cross-ratio matrix sending the base (0, 1, 2) to (∞, 0, 1). */
     private final int[] baseToStandard;
 
@@ -56,6 +61,34 @@ final class ProjectiveFamily implements PermutationFamily {
         for (int x = 0; x <= q; x++) {
             out[x] = apply(m, x);
         }
+    }
+
+    @Override
+    public int preimage(long index, int letter, int[] scratch) {
+        int points = q + 1;
+        if (points > 128 || (long) points * points * q > 1 << 20) {
+            return PermutationFamily.super.preimage(index, letter, scratch);
+        }
+        long count = (long) points * q * (q - 1);
+        if (index < 0 || index >= count) {
+            throw new IndexOutOfBoundsException("member " + index + " of " + name());
+        }
+        if (letter < 0 || letter >= points) {
+            throw new IllegalArgumentException("point " + letter + " is not below " + points);
+        }
+        byte[] table = inverse;
+        if (table == null) {
+            table = new byte[(int) count * points];
+            int[] image = new int[points];
+            for (int i = 0; i < count; i++) {
+                member(BigInteger.valueOf(i), image);
+                for (int x = 0; x < points; x++) {
+                    table[i * points + image[x]] = (byte) x;
+                }
+            }
+            inverse = table;
+        }
+        return table[(int) index * points + letter];
     }
 
     /** Returns [a, b, c, d] of the map sending y0 → ∞, y1 → 0, y2 → 1. */

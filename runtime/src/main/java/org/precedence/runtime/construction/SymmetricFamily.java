@@ -52,6 +52,14 @@ final class SymmetricFamily implements PermutationFamily {
     }
 
     @Override
+    public int preimage(long index, int letter, int[] scratch) {
+        if (!Lehmer.preimageServes(n)) {
+            return PermutationFamily.super.preimage(index, letter, scratch);
+        }
+        return Lehmer.preimage(index, n, letter, false);
+    }
+
+    @Override
     public FamilyProof prove() {
         // Every member is a permutation and rank∘member is the identity, so members are
         // pairwise distinct; n! distinct permutations are all of them. For the full group the

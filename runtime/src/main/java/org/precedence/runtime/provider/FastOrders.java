@@ -1,12 +1,15 @@
 package org.precedence.runtime.provider;
 
+import java.math.BigInteger;
 import org.precedence.api.OrderRule;
 import org.precedence.api.RankingConvention;
+import org.precedence.runtime.construction.ConstructedDice;
 import org.precedence.runtime.dice.ExplicitDice;
 import org.precedence.runtime.dice.MixedRadixDice;
 import org.precedence.runtime.randomness.BlockCursor;
 import org.precedence.runtime.randomness.BoundedSampler;
 import org.precedence.runtime.randomness.RollGenerator;
+import org.precedence.runtime.randomness.SeededFaces;
 
 /**
  * A session's orders for simulations: {@link #orderInto} gives exactly the
@@ -19,12 +22,15 @@ import org.precedence.runtime.randomness.RollGenerator;
  * attempt-0 words of four players for one round. Each face is taken by Lemire's method, and
  * the players are ranked by counting lower faces (branch-free; insertion sort above 16
  * players); a rejected chunk or word falls back to the general draw of the next attempts.
- * Constructed sets take the general lazy path.
+ * Constructed sets are ranked by {@link PrefixRanker}: a few leading digits per die, drawn a
+ * lane group at a time, decide the order unless two dice tie on them.
  *
  * <p>Allocation: none for explicit sets in fast mode when rounds are asked in increasing order
  * (the usual simulation loop: the Philox generator of each lane is stepped); a jump to another
  * block builds one library generator (48 bytes); secure mode allocates the JDK's 32-byte MAC
- * result per block; constructed sets allocate their lazily drawn digits.
+ * result per block; constructed sets allocate what their blocks' library generators need (about
+ * 180 bytes per 10-player round, JMH {@code -prof gc}), the lazy comparison's memo when two dice
+ * tie on their leading digits, and one BigInteger per exact face.
  *
  * <p>Not thread-safe: it owns scratch arrays. Create one per thread ({@link
  * DiceSession#fastOrders()} is cheap).
@@ -41,6 +47,8 @@ public final class FastOrders implements Ranker {
     private final long[] block = new long[RollGenerator.LANES];
     /** Per player count: the set's table if it is explicit, narrow-drawn and below 2^16 sides. */
     private final NarrowTable[] narrow;
+    /** Per player count: the ranker of a constructed set. */
+    private final PrefixRanker[] prefix;
     /**
      * Narrow blocks kept per (stream, group) slot: words, draw index / 4 and counter word c1.
      * A narrow c1 always has bit 31 set, so the initial 0 never matches.
@@ -64,6 +72,7 @@ public final class FastOrders implements Ranker {
         this.rule = session.spec().rule();
         this.sets = new MixedRadixDice[session.maxPlayers() + 1];
         this.narrow = new NarrowTable[sets.length];
+        this.prefix = new PrefixRanker[sets.length];
     }
 
     /**
@@ -123,6 +132,41 @@ public final class FastOrders implements Ranker {
         System.arraycopy(keys, 0, faces, 0, players);
     }
 
+    /**
+     * Like {@link #orderInto(long, int, int[])}, and also writes the exact face values of the
+     * roll behind the order ({@code faces[i]} for player i, as {@link DiceSession#roll} reports
+     * them) for any set, explicit or constructed.
+     *
+     * @throws IllegalArgumentException as above, or if {@code faces} is too short or a single
+     *                                  player is asked for
+     */
+    public void orderInto(long round, int players, int[] out, BigInteger[] faces) {
+        if (faces.length < players) {
+            throw new IllegalArgumentException("faces has " + faces.length + " slots for " + players + " players");
+        }
+        orderInto(round, players, out);
+        if (players == 1) {
+            throw new IllegalArgumentException("a single player rolls no die");
+        }
+        PrefixRanker ranker = prefix[players];
+        if (ranker != null) {
+            ranker.facesInto(generator, Streams.ROUND, Streams.facesIndex(rule, round), faces);
+            return;
+        }
+        if (sets[players] instanceof ExplicitDice) {
+            // Every rule ranks the draw whose faces it reports last, so the keys hold exactly those.
+            for (int d = 0; d < players; d++) {
+                faces[d] = BigInteger.valueOf(keys[d]);
+            }
+            return;
+        }
+        SeededFaces shown = new SeededFaces(generator, cursor, sets[players], Streams.facesIndex(rule, round),
+                Streams.ROUND);
+        for (int d = 0; d < players; d++) {
+            faces[d] = shown.faceValue(d);
+        }
+    }
+
     @Override
     public void rankInto(int stream, long index, int players, int[] out) {
         MixedRadixDice dice = sets[players];
@@ -134,10 +178,14 @@ public final class FastOrders implements Ranker {
                 if (players == RollGenerator.LANES && rule == OrderRule.FRESH_EACH_ROUND) {
                     freshFour = narrow[players];
                 }
+            } else if (dice instanceof ConstructedDice c) {
+                prefix[players] = new PrefixRanker(c, generator.narrowDraws());
             }
         }
         if (dice instanceof ExplicitDice explicit) {
             rankExplicit(explicit, stream, index, players, out);
+        } else if (prefix[players] != null) {
+            prefix[players].rankInto(generator, cursor, convention, stream, index, out);
         } else {
             LazyRanker.rankInto(generator, cursor, dice, convention, stream, index, out);
         }

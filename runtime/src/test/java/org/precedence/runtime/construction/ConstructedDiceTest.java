@@ -55,6 +55,50 @@ class ConstructedDiceTest {
         }
     }
 
+    /**
+     * The long face path and the prefix keys against the BigInteger definition: same value for
+     * random digits, and keys that order faces exactly as their values whenever they differ.
+     */
+    @Test
+    void faceValueOnLongs_andPrefixKeys_agreeWithBigIntegerFaceValue() {
+        SplittableRandom random = new SplittableRandom(6012L); // fixed seed: inputs only
+        int served = 0;
+        for (int n : new int[] {2, 3, 4, 5, 6, 7, 10, 11, 12, 13, 33, 64}) {
+            ConstructedDice dice = new ConstructedDice(Construction.smallest(n));
+            int prefix = dice.prefixDigits(24);
+            for (int trial = 0; trial < 300; trial++) {
+                int a = random.nextInt(n);
+                int b = (a + 1 + random.nextInt(n - 1)) % n;
+                BigInteger[] da = randomDigits(dice, random);
+                BigInteger[] db = randomDigits(dice, random);
+                System.arraycopy(da, 0, db, 0, random.nextInt(dice.digits() + 1));
+                BigInteger va = dice.faceValue(a, da);
+                BigInteger vb = dice.faceValue(b, db);
+                if (dice.hasLongDigits()) {
+                    served++;
+                    assertEquals(va, dice.faceValue(a, longs(da), new int[n], new long[dice.faceLimbs()]), "n=" + n);
+                    assertEquals(vb, dice.faceValue(b, longs(db), new int[n], new long[dice.faceLimbs()]), "n=" + n);
+                }
+                long[] la = longs(java.util.Arrays.copyOf(da, prefix));
+                long[] lb = longs(java.util.Arrays.copyOf(db, prefix));
+                long ka = dice.prefixKey(la, prefix);
+                long kb = dice.prefixKey(lb, prefix);
+                if (ka != kb) {
+                    assertEquals(Long.signum(ka - kb), va.compareTo(vb), "n=" + n + " trial " + trial);
+                }
+            }
+        }
+        assertTrue(served >= 300 * 6, "the long path served too few sets: " + served);
+    }
+
+    private static long[] longs(BigInteger[] digits) {
+        long[] out = new long[digits.length];
+        for (int j = 0; j < digits.length; j++) {
+            out[j] = digits[j].longValueExact();
+        }
+        return out;
+    }
+
     @Test
     void compare_agreesWithFaceValues_uptoSixtyFourDice() {
         long seed = 20261202L;

@@ -23,6 +23,8 @@ import org.precedence.api.RankingConvention;
 import org.precedence.api.RoundResult;
 import org.precedence.api.SessionSeed;
 import org.precedence.api.SessionSpec;
+import org.precedence.runtime.construction.ConstructedDice;
+import org.precedence.runtime.construction.Construction;
 import org.precedence.runtime.dice.MixedRadixDice;
 import org.precedence.runtime.randomness.RollGenerator;
 import org.precedence.runtime.randomness.TwoLevelDice;
@@ -160,6 +162,83 @@ class DiceSessionTest {
             assertArrayEquals(orderOf(r), out);
             for (int p = 1; p < 3; p++) {
                 assertTrue(r.rolls().get(out[p - 1]).faceValue().compareTo(r.rolls().get(out[p]).faceValue()) < 0);
+            }
+        }
+    }
+
+    /**
+     * The standard sets for 10, 12 and 64 players are constructed: the prefix ranking of
+     * FastOrders and its exact faces must be those of DiceSession.roll under every rule,
+     * both conventions and every algorithm id.
+     */
+    @Test
+    void fastOrders_constructedStandardSetsMatchRollWithFaces() {
+        java.util.Random random = new java.util.Random(1012064L); // fixed seed: round numbers only
+        for (String algorithm : RollGenerator.ALGORITHM_IDS) {
+            RandomnessMode mode = RollGenerator.modeOf(algorithm);
+            for (OrderRule rule : OrderRule.values()) {
+                for (RankingConvention convention : RankingConvention.values()) {
+                    DiceSession s = DiceSession.open(new SessionSpec(SEED, mode, rule, convention),
+                            FairDiceProvider.standardSets(), algorithm);
+                    FastOrders fast = s.fastOrders();
+                    for (int n : new int[] {10, 12, 64}) {
+                        assertTrue(s.setFor(n) instanceof ConstructedDice, "n=" + n);
+                        int[] out = new int[n];
+                        BigInteger[] faces = new BigInteger[n];
+                        int rounds = n == 64 ? 3 : 12;
+                        for (int i = 0; i < rounds; i++) {
+                            long k = i % 2 == 0 ? i : random.nextLong(Long.MAX_VALUE);
+                            RoundResult r = s.roll(k, n);
+                            String where = algorithm + " " + rule + " " + convention + " n=" + n + " round " + k;
+                            fast.orderInto(k, n, out, faces);
+                            assertArrayEquals(orderOf(r), out, where);
+                            for (int d = 0; d < n; d++) {
+                                assertEquals(r.rolls().get(d).faceValue(), faces[d], where + " die " + d);
+                            }
+                            java.util.Arrays.fill(out, -1);
+                            fast.orderInto(k, n, out);
+                            assertArrayEquals(orderOf(r), out, where);
+                        }
+                    }
+                }
+            }
+        }
+    }
+
+    /**
+     * A small constructed set whose leading digits often tie (three players, a few dozen
+     * sub-blocks): the tie fallback must give the orders of DiceSession.roll.
+     */
+    @Test
+    void fastOrders_constructedSetWithFrequentPrefixTiesMatchesRoll() {
+        for (int n = 3; n <= 5; n++) {
+            ConstructedDice dice = new ConstructedDice(Construction.smallest(n));
+            int players = n;
+            SetSource source = new SetSource() {
+                @Override
+                public MixedRadixDice forPlayers(int count, FairnessGrade grade) {
+                    return dice;
+                }
+
+                @Override
+                public int maxPlayers() {
+                    return players;
+                }
+            };
+            for (RankingConvention convention : RankingConvention.values()) {
+                DiceSession s = DiceSession.open(new SessionSpec(SEED, RandomnessMode.FAST,
+                        OrderRule.FRESH_EACH_ROUND, convention), source);
+                FastOrders fast = s.fastOrders();
+                int[] out = new int[n];
+                BigInteger[] faces = new BigInteger[n];
+                for (long k = 0; k < 300; k++) {
+                    RoundResult r = s.roll(k, n);
+                    fast.orderInto(k, n, out, faces);
+                    assertArrayEquals(orderOf(r), out, "n=" + n + " " + convention + " round " + k);
+                    for (int d = 0; d < n; d++) {
+                        assertEquals(r.rolls().get(d).faceValue(), faces[d]);
+                    }
+                }
             }
         }
     }

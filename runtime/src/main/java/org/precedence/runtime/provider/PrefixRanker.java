@@ -1,0 +1,192 @@
+package org.precedence.runtime.provider;
+
+import java.math.BigInteger;
+import org.precedence.api.RankingConvention;
+import org.precedence.runtime.construction.ConstructedDice;
+import org.precedence.runtime.randomness.BlockCursor;
+import org.precedence.runtime.randomness.BoundedSampler;
+import org.precedence.runtime.randomness.RollGenerator;
+
+/**
+ * The fast ranking of a constructed set: the first few digits of every die, drawn as longs
+ * lane group by lane group (one generator block serves four dice) by exactly the rule of
+ * {@link org.precedence.runtime.randomness.SeededFaces}, give each die a {@link
+ * ConstructedDice#prefixKey prefix key}; distinct keys decide the order. When two keys are
+ * equal (about once in 2^20 rounds / pairs) the round is ranked again by {@link LazyRanker},
+ * which draws the same digits and compares to the bottom, so the order is always that of
+ * {@link DiceSession#roll}.
+ *
+ * <p>Not thread-safe: it owns its scratch arrays (one per {@link FastOrders}).
+ */
+final class PrefixRanker {
+    /** Prefix keys span at least 2^(2·log2(n) + this) sub-blocks: ties come about once in 2^13 rounds or less. */
+    private static final int SPARE_KEY_BITS = 12;
+    private final ConstructedDice dice;
+    private final int players;
+    private final int prefix;
+    /** Radices of every digit as longs; 0 when a radix does not fit (faces then use BigInteger). */
+    private final long[] radix;
+    private final boolean narrowDraws;
+    private final long[][] digits;
+    private final long[] keys;
+    private final long[] block = new long[RollGenerator.LANES];
+    /** The draw whose leading digits {@code digits[·][0..prefix)} hold (stream −1: none yet). */
+    private int drawnStream = -1;
+    private long drawnIndex;
+    /**
+     * Narrow blocks kept per (digit, lane group): they serve four consecutive indices, so
+     * rounds asked in order draw each once per four rounds. {@code narrowC0} is c0 + 1 of
+     * the kept block (0: none).
+     */
+    private final long[][] narrowWords;
+    private final long[] narrowC0;
+    private final int[] letters;
+    private final long[] limbs;
+
+    PrefixRanker(ConstructedDice dice, boolean narrowDraws) {
+        this.dice = dice;
+        this.players = dice.players();
+        int pairBits = 2 * (32 - Integer.numberOfLeadingZeros(players - 1));
+        this.prefix = dice.prefixDigits(pairBits + SPARE_KEY_BITS);
+        this.radix = new long[dice.digits()];
+        for (int j = 0; j < radix.length; j++) {
+            BigInteger r = dice.radix(0, j);
+            radix[j] = r.bitLength() < 63 ? r.longValue() : 0;
+        }
+        this.narrowDraws = narrowDraws;
+        this.digits = new long[players][radix.length];
+        this.keys = new long[players];
+        int groups = (players + RollGenerator.LANES - 1) / RollGenerator.LANES;
+        this.narrowWords = new long[prefix * groups][RollGenerator.LANES];
+        this.narrowC0 = new long[prefix * groups];
+        this.letters = new int[players];
+        this.limbs = new long[dice.faceLimbs()];
+    }
+
+    /** Ranks draw (stream, index) into {@code out}, first to act first. */
+    void rankInto(RollGenerator generator, BlockCursor cursor, RankingConvention convention, int stream,
+            long index, int[] out) {
+        int n = players;
+        for (int j = 0; j < prefix; j++) {
+            drawDigit(generator, stream, index, j);
+        }
+        drawnStream = stream;
+        drawnIndex = index;
+        long[] k = keys;
+        for (int d = 0; d < n; d++) {
+            k[d] = dice.prefixKey(digits[d], prefix);
+        }
+        boolean lowestFirst = convention == RankingConvention.LOWEST_FIRST;
+        int ties = 0;
+        for (int i = 0; i < n; i++) {
+            long key = k[i];
+            int lower = 0;
+            for (int j = 0; j < n; j++) {
+                // Keys are below 2^62, so the sign of the difference is exact.
+                long diff = k[j] - key;
+                lower += (int) (diff >>> 63);
+                ties += diff == 0 ? 1 : 0;
+            }
+            out[lowestFirst ? lower : n - 1 - lower] = i;
+        }
+        if (ties != n) {
+            // Two dice share a sub-block: let the full comparison decide (same digits).
+            LazyRanker.rankInto(generator, cursor, dice, convention, stream, index, out);
+        }
+    }
+
+    /**
+     * Writes the exact face values of draw (stream, index) into {@code faces}: every digit
+     * drawn as here, evaluated by {@link ConstructedDice#faceValue}.
+     */
+    void facesInto(RollGenerator generator, int stream, long index, BigInteger[] faces) {
+        int m = radix.length;
+        // The leading digits are kept from the ranking of the same draw (the usual case).
+        int first = drawnStream == stream && drawnIndex == index ? prefix : 0;
+        for (int j = first; j < m; j++) {
+            if (radix[j] == 0) {
+                // A digit of 2^63 or more: the general draw (no served set has one today).
+                for (int d = 0; d < players; d++) {
+                    digits[d][j] = -1;
+                }
+            } else {
+                drawDigit(generator, stream, index, j);
+            }
+        }
+        if (dice.hasLongDigits()) {
+            for (int d = 0; d < players; d++) {
+                faces[d] = dice.faceValue(d, digits[d], letters, limbs);
+            }
+            return;
+        }
+        BigInteger[] spelled = new BigInteger[m];
+        for (int d = 0; d < players; d++) {
+            for (int j = 0; j < m; j++) {
+                spelled[j] = radix[j] == 0
+                        ? generator.digit(index, stream, d, j, dice.radix(d, j))
+                        : BigInteger.valueOf(digits[d][j]);
+            }
+            faces[d] = dice.faceValue(d, spelled);
+        }
+    }
+
+    /**
+     * Draws digit {@code j} of every die into {@code digits[d][j]}, one block per lane group,
+     * straight from the generator (measured faster here than stepping a cursor's kept streams).
+     */
+    private void drawDigit(RollGenerator generator, int stream, long index, int j) {
+        long r = radix[j];
+        int n = players;
+        if (r == 1) {
+            for (int d = 0; d < n; d++) {
+                digits[d][j] = 0;
+            }
+        } else if (narrowDraws && r < RollGenerator.NARROW_LIMIT) {
+            int ri = (int) r;
+            for (int g = 0; g < n; g += RollGenerator.LANES) {
+                long[] words = narrowBlock(generator, stream, index, g, j);
+                int end = Math.min(n, g + RollGenerator.LANES);
+                for (int d = g; d < end; d++) {
+                    int v = BoundedSampler.lemire16(RollGenerator.chunkOf(words, index, d), ri);
+                    if (v == BoundedSampler.REJECTED) {
+                        v = generator.narrowDigit(index, stream, d, j, ri); // attempt 0 again, then 1, 2, …
+                    }
+                    digits[d][j] = v;
+                }
+            }
+        } else {
+            for (int g = 0; g < n; g += RollGenerator.LANES) {
+                generator.block(index, RollGenerator.groupWord(stream, g), j, 0, block);
+                int end = Math.min(n, g + RollGenerator.LANES);
+                for (int d = g; d < end; d++) {
+                    long v = BoundedSampler.lemire64(block[d & 3], r);
+                    for (long attempt = 1; v == BoundedSampler.REJECTED; attempt++) {
+                        v = BoundedSampler.lemire64(generator.word(index, stream, d, j, attempt), r);
+                    }
+                    digits[d][j] = v;
+                }
+            }
+        }
+    }
+
+    /**
+     * The narrow block of lane group {@code g} for digit {@code j}; blocks of the leading digits
+     * on stream 0 are kept per (digit, group) and reused while c0 = index / 4 stays the same.
+     */
+    private long[] narrowBlock(RollGenerator generator, int stream, long index, int g, int j) {
+        long c0 = index >>> 2;
+        long c1 = RollGenerator.narrowGroupWord(stream, g);
+        if (j >= prefix || stream != Streams.ROUND) {
+            generator.block(c0, c1, j, 0, block);
+            return block;
+        }
+        int kept = j * (narrowWords.length / prefix) + (g >>> 2);
+        long[] words = narrowWords[kept];
+        if (narrowC0[kept] != c0 + 1) {
+            generator.block(c0, c1, j, 0, block);
+            System.arraycopy(block, 0, words, 0, RollGenerator.LANES);
+            narrowC0[kept] = c0 + 1;
+        }
+        return words;
+    }
+}
