@@ -17,6 +17,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.precedence.game.fake.ShuffleProvider;
 import picocli.CommandLine;
 
 class PlayCommandTest {
@@ -28,7 +29,7 @@ class PlayCommandTest {
     static Run run(String stdin, String... args) {
         ErrorMapper errors = new ErrorMapper();
         CommandLine cmd = new CommandLine(new PlayCommand(() -> new BufferedReader(new StringReader(stdin)),
-                TestShuffleProvider::new))
+                ShuffleProvider::new))
                 .setParameterExceptionHandler(errors)
                 .setExecutionExceptionHandler(errors)
                 .setCaseInsensitiveEnumValuesAllowed(true);
