@@ -14,16 +14,16 @@ import picocli.CommandLine.HelpCommand;
         description = "Exactly fair, tie-free, replayable turn orders for tabletop games.",
         subcommands = {
             HelpCommand.class,
-            RollCommand.class,
-            ReplayCommand.class,
-            SetCommand.class,
-            PlayCommand.class,
-            ServeCommand.class,
-            org.precedence.cli.simulate.SimulateCommand.class,
-            org.precedence.cli.export.ExportCommand.class,
             VerifyCommand.class,
             SearchCommand.class,
             CatalogCommand.class,
+            SetCommand.class,
+            RollCommand.class,
+            org.precedence.cli.simulate.SimulateCommand.class,
+            ReplayCommand.class,
+            org.precedence.cli.export.ExportCommand.class,
+            ServeCommand.class,
+            PlayCommand.class,
         })
 public final class PrecedenceApplication implements Callable<Integer> {
 
