@@ -1,15 +1,7 @@
 package org.precedence.runtime.catalog;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
-import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -21,6 +13,7 @@ import org.precedence.runtime.analysis.FairnessReport;
 import org.precedence.runtime.catalog.CatalogEntry.Provenance;
 import org.precedence.runtime.dice.DiceSet;
 import org.precedence.runtime.dice.Word;
+import org.precedence.runtime.files.AtomicWrite;
 import org.precedence.runtime.search.FairSetSearch;
 import org.precedence.runtime.search.SearchRequest;
 import org.precedence.runtime.search.SearchResult;
@@ -72,36 +65,9 @@ public final class CatalogGenerator {
         return entries;
     }
 
-    /** Writes through a temporary file in the same directory, forced to disk, then renamed. */
+    /** Writes the catalog atomically through the project's one writer. */
     static void writeAtomically(Path file, String content) throws IOException {
-        Path target = file.toAbsolutePath();
-        Path dir = target.getParent();
-        if (dir == null || !Files.isDirectory(dir)) {
-            throw new IOException("directory " + dir + " does not exist");
-        }
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-        try {
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE,
-                    StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer buf = ByteBuffer.wrap(content.getBytes(StandardCharsets.UTF_8));
-                while (buf.hasRemaining()) {
-                    ch.write(buf);
-                }
-                ch.force(true);
-            }
-            if (Files.getFileStore(tmp).supportsFileAttributeView("posix")) {
-                // Temporary files are private; the catalog is an ordinary readable source file.
-                Files.setPosixFilePermissions(tmp, PosixFilePermissions.fromString("rw-r--r--"));
-            }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE,
-                        StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                throw new IOException("cannot replace " + target + " atomically on this file system", e);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        AtomicWrite.writeString(file, content);
     }
 
     private static CatalogEntry exhaustive(int[] sides, Consumer<String> log) {

@@ -1,5 +1,16 @@
 package org.precedence.runtime.replay;
 
+import java.io.IOException;
+import java.io.StringReader;
+import java.math.BigInteger;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.regex.Pattern;
 import com.google.gson.Gson;
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
@@ -10,26 +21,11 @@ import com.google.gson.JsonPrimitive;
 import com.google.gson.Strictness;
 import com.google.gson.stream.JsonReader;
 import com.google.gson.stream.JsonToken;
-import java.io.IOException;
-import java.io.StringReader;
-import java.math.BigInteger;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
-import java.util.ArrayList;
-import java.util.List;
-import java.util.Locale;
-import java.util.Optional;
-import java.util.regex.Pattern;
 import org.precedence.api.OrderRule;
 import org.precedence.api.RandomnessMode;
 import org.precedence.api.RankingConvention;
 import org.precedence.api.SessionSeed;
+import org.precedence.runtime.files.AtomicWrite;
 
 /**
  * Session logs as JSON files. Writing is atomic: the text goes to a temporary file in the
@@ -169,42 +165,12 @@ public final class SessionLogFiles {
         return fromJson(Files.readString(path, StandardCharsets.UTF_8));
     }
 
-    /** Writes {@code text} as UTF-8 to {@code path} atomically. */
+    /** Writes {@code text} as UTF-8 to {@code path} atomically (see {@link AtomicWrite}). */
     public static void writeAtomically(Path path, String text) throws IOException {
-        Path target = path.toAbsolutePath();
-        Path dir = target.getParent();
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-        try {
-            if (Files.getFileStore(tmp).supportsFileAttributeView("posix")) {
-                // Temp files start private (0600); a log is an ordinary readable file.
-                Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
-            }
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer buf = ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
-                while (buf.hasRemaining()) {
-                    ch.write(buf);
-                }
-                ch.force(true);
-            }
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                throw new IOException("cannot rename atomically in " + dir + ": " + e.getMessage(), e);
-            }
-            syncDirectory(dir);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        AtomicWrite.writeString(path, text);
     }
 
-    /** Makes the rename durable where the platform allows syncing a directory (POSIX). */
-    private static void syncDirectory(Path dir) {
-        try (FileChannel ch = FileChannel.open(dir, StandardOpenOption.READ)) {
-            ch.force(true);
-        } catch (IOException | UnsupportedOperationException e) {
-            // Not every platform can open a directory; the rename itself is still atomic.
-        }
-    }
+
 
     private static JsonElement field(JsonObject o, String name, String where) {
         JsonElement e = o.get(name);

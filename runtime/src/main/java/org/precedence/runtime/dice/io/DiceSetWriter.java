@@ -1,17 +1,10 @@
 package org.precedence.runtime.dice.io;
 
 import java.io.IOException;
-import java.io.OutputStream;
-import java.nio.channels.FileChannel;
-import java.nio.channels.Channels;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 import java.util.Map;
 import org.precedence.runtime.dice.DiceSet;
+import org.precedence.runtime.files.AtomicWrite;
 
 /**
  * Writes dice sets in the forms {@link DiceSetReader} reads. Faces are written in the order
@@ -91,31 +84,11 @@ public final class DiceSetWriter {
     }
 
     /**
-     * Writes {@code content} to {@code target} atomically: a temporary file in the same
-     * directory, forced to disk, then renamed over the target. On failure the target is
-     * untouched and the temporary file removed.
+     * Writes {@code content} to {@code target} atomically (see {@link AtomicWrite}): on failure
+     * the target is untouched and the temporary file removed.
      */
     public static void writeAtomically(Path target, String content) throws IOException {
-        Path absolute = target.toAbsolutePath();
-        Path dir = absolute.getParent();
-        Path tmp = Files.createTempFile(dir, "." + absolute.getFileName(), ".tmp");
-        try {
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE,
-                    StandardOpenOption.TRUNCATE_EXISTING);
-                 OutputStream out = Channels.newOutputStream(ch)) {
-                out.write(content.getBytes(StandardCharsets.UTF_8));
-                out.flush();
-                ch.force(true);
-            }
-            try {
-                Files.move(tmp, absolute, StandardCopyOption.ATOMIC_MOVE,
-                        StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        AtomicWrite.writeString(target, content);
     }
 
     /** JSON string literal: quotes, backslashes and control characters escaped. */
