@@ -44,7 +44,7 @@ class RollAndReplayCommandTest {
             BigInteger after = new BigInteger(faces.get(order.get(p).getAsInt()).getAsString());
             assertTrue(before.compareTo(after) < 0);
         }
-        assertEquals("precedence-roll-v2/philox4x64", o.get("algorithm").getAsString());
+        assertEquals("precedence-roll-v3/philox4x64", o.get("algorithm").getAsString());
         assertEquals(SessionSeed.fromText("copper kettle").commitment(), o.get("commitment").getAsString());
         assertEquals("ORDER_FAIR", o.get("grade").getAsString());
         assertTrue(o.has("setId"));

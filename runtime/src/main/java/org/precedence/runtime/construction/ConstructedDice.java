@@ -32,6 +32,13 @@ public final class ConstructedDice implements MixedRadixDice {
     private final boolean startDigit;
     /** Each radix as a long, or 0 when it is 2^63 or more (prefix keys never reach those). */
     private final long[] radixLong;
+    /**
+     * {@link Level#reversed(long)} unrolled for the prefix keys, which the fast ranking computes
+     * for every die every round: per digit, whether every nonzero block is reversed, else the
+     * listed flags (or null: never reversed).
+     */
+    private final boolean[] nonZeroReversed;
+    private final boolean[][] listedReversed;
     /** Radices as longs when every one is below 2^62, else null (no long face path). */
     private final long[] longRadix;
     /** {@code flushBefore[j]}: the long face path starts a new 62-bit chunk at digit j. */
@@ -77,6 +84,12 @@ public final class ConstructedDice implements MixedRadixDice {
         this.radixLong = new long[radix.length];
         for (int j = 0; j < radix.length; j++) {
             radixLong[j] = radix[j].bitLength() < 63 ? radix[j].longValue() : 0;
+        }
+        this.nonZeroReversed = new boolean[l];
+        this.listedReversed = new boolean[l][];
+        for (int j = 0; j < l; j++) {
+            nonZeroReversed[j] = byDigit[j].reversesAllButFirst();
+            listedReversed[j] = byDigit[j].listedReversals();
         }
         this.flushBefore = new boolean[l];
         long chunkProduct = 1;
@@ -241,17 +254,50 @@ public final class ConstructedDice implements MixedRadixDice {
      */
     public long prefixKey(long[] digits, int k) {
         long key = 0;
-        boolean negative = false;
+        // All ones while an odd number of enclosing blocks is reversed. Branch-free: the digits
+        // are random, so a branch on them would mispredict about every other die.
+        long negative = 0;
         for (int j = 0; j < k; j++) {
             long r = radixLong[j];
             long d = digits[j];
             // A reversed enclosing block reads its sub-blocks from the last to the first.
-            key = key * r + (negative ? r - 1 - d : d);
-            if (byDigit[j].reversed(d)) {
-                negative = !negative;
-            }
+            key = key * r + d + ((r - 1 - 2 * d) & negative);
+            negative = flipAfter(j, d, negative);
         }
         return key;
+    }
+
+    /** The reversal mask below digit j's block d: {@code negative} flipped if that block is reversed. */
+    private long flipAfter(int j, long d, long negative) {
+        if (nonZeroReversed[j]) {
+            return negative ^ ((d | -d) >> 63); // d ≥ 0: all ones exactly when d ≠ 0
+        }
+        boolean[] listed = listedReversed[j];
+        return listed != null && listed[(int) d] ? ~negative : negative;
+    }
+
+    /**
+     * {@inheritDoc}
+     *
+     * <p>Here the key is the {@link #prefixKey prefix key}, the rank of the sub-block in value
+     * order: its mixed-radix digits t_j, each read backwards (d_j = R_j − 1 − t_j) while an odd
+     * number of the enclosing blocks (the digits above j) are reversed.
+     */
+    @Override
+    public void leadingDigits(int die, long key, int k, long[] out) {
+        checkDie(die);
+        long v = key;
+        for (int j = k - 1; j >= 0; j--) {
+            out[j] = v % radixLong[j];
+            v /= radixLong[j];
+        }
+        long negative = 0;
+        for (int j = 0; j < k; j++) {
+            long r = radixLong[j];
+            long d = out[j] + ((r - 1 - 2 * out[j]) & negative);
+            out[j] = d;
+            negative = flipAfter(j, d, negative);
+        }
     }
 
     /** Returns whether {@link #faceValue(int, long[], int[], long[])} serves this set (every radix below 2^62). */

@@ -170,6 +170,16 @@ public final class Level {
         return family == null && block.signum() != 0;
     }
 
+    /** Returns whether every block but block 0 is written backwards (the doubling levels). */
+    boolean reversesAllButFirst() {
+        return listed == null && family == null;
+    }
+
+    /** Returns the listed levels' reversal flags by block (not a copy), or null for other levels. */
+    boolean[] listedReversals() {
+        return listedReversed;
+    }
+
     /** As {@link #reversed(BigInteger)} for a block index that fits a long. */
     boolean reversed(long block) {
         if (listed != null) {

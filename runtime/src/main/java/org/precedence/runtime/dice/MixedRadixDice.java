@@ -47,6 +47,27 @@ public interface MixedRadixDice {
     }
 
     /**
+     * Writes the first {@code k} digits of die {@code die}'s faces whose <em>leading key</em> is
+     * {@code key} into {@code out[0..k)}: the inverse of numbering the possible leading-digit
+     * strings 0, 1, …, R_0·…·R_{k−1} − 1. The numbering is a bijection, so a uniform key gives
+     * independent uniform digits; the roll algorithm with leading groups draws the key
+     * ({@code org.precedence.runtime.randomness.LeadingGroup}). A set whose values follow a
+     * different order than its digit strings numbers them in value order, so that the key alone
+     * ranks faces that differ within those digits. The default numbers them plainly (the digits
+     * of the key in mixed radix, most significant first).
+     *
+     * @param key in {@code [0, R_0·…·R_{k−1})}, which must be below 2^63
+     */
+    default void leadingDigits(int die, long key, int k, long[] out) {
+        long v = key;
+        for (int j = k - 1; j >= 0; j--) {
+            long r = radix(die, j).longValueExact();
+            out[j] = v % r;
+            v /= r;
+        }
+    }
+
+    /**
      * Compares the faces rolled by two different dice: negative when {@code a}'s value is lower.
      * Never 0 for different dice, since all values in a set are distinct.
      */

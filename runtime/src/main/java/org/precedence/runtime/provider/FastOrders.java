@@ -179,7 +179,7 @@ public final class FastOrders implements Ranker {
                     freshFour = narrow[players];
                 }
             } else if (dice instanceof ConstructedDice c) {
-                prefix[players] = new PrefixRanker(c, generator.narrowDraws());
+                prefix[players] = new PrefixRanker(c, generator);
             }
         }
         if (dice instanceof ExplicitDice explicit) {

@@ -5,13 +5,17 @@ import org.precedence.api.RankingConvention;
 import org.precedence.runtime.construction.ConstructedDice;
 import org.precedence.runtime.randomness.BlockCursor;
 import org.precedence.runtime.randomness.BoundedSampler;
+import org.precedence.runtime.randomness.LeadingGroup;
 import org.precedence.runtime.randomness.RollGenerator;
 
 /**
  * The fast ranking of a constructed set: the first few digits of every die, drawn as longs
- * lane group by lane group (one generator block serves four dice) by exactly the rule of
- * {@link org.precedence.runtime.randomness.SeededFaces}, give each die a {@link
- * ConstructedDice#prefixKey prefix key}; distinct keys decide the order. When two keys are
+ * lane group by lane group by exactly the rule of {@link
+ * org.precedence.runtime.randomness.SeededFaces}, give each die a {@link
+ * ConstructedDice#prefixKey prefix key}; distinct keys decide the order. Under an algorithm with
+ * {@link RollGenerator#leadingGroups() leading groups} the prefix covers at least the {@link
+ * LeadingGroup}, which one block draws for eight dice (for ten players: two blocks a round and
+ * nothing else, unless a key ties); otherwise one block serves four dice per digit. When two keys are
  * equal (about once in 2^20 rounds / pairs) the round is ranked again by {@link LazyRanker},
  * which draws the same digits and compares to the bottom, so the order is always that of
  * {@link DiceSession#roll}.
@@ -27,6 +31,10 @@ final class PrefixRanker {
     /** Radices of every digit as longs; 0 when a radix does not fit (faces then use BigInteger). */
     private final long[] radix;
     private final boolean narrowDraws;
+    /** The dice's leading group (the same for every die of a construction); null if none is drawn. */
+    private final LeadingGroup group;
+    /** Whether the prefix is exactly the leading group, so that the drawn keys rank the dice. */
+    private final boolean keysOnly;
     private final long[][] digits;
     private final long[] keys;
     private final long[] block = new long[RollGenerator.LANES];
@@ -43,17 +51,22 @@ final class PrefixRanker {
     private final int[] letters;
     private final long[] limbs;
 
-    PrefixRanker(ConstructedDice dice, boolean narrowDraws) {
+    PrefixRanker(ConstructedDice dice, RollGenerator generator) {
         this.dice = dice;
         this.players = dice.players();
         int pairBits = 2 * (32 - Integer.numberOfLeadingZeros(players - 1));
-        this.prefix = dice.prefixDigits(pairBits + SPARE_KEY_BITS);
+        LeadingGroup leading = generator.leadingGroups() ? LeadingGroup.of(dice, 0) : null;
+        this.group = leading == null || leading.digits() == 0 ? null : leading;
+        // The group's digits come together, so the prefix takes all of them (their product is
+        // below 2^24, so the key still fits a long).
+        this.prefix = Math.max(dice.prefixDigits(pairBits + SPARE_KEY_BITS), group == null ? 0 : group.digits());
+        this.keysOnly = group != null && prefix == group.digits();
         this.radix = new long[dice.digits()];
         for (int j = 0; j < radix.length; j++) {
             BigInteger r = dice.radix(0, j);
             radix[j] = r.bitLength() < 63 ? r.longValue() : 0;
         }
-        this.narrowDraws = narrowDraws;
+        this.narrowDraws = generator.narrowDraws();
         this.digits = new long[players][radix.length];
         this.keys = new long[players];
         int groups = (players + RollGenerator.LANES - 1) / RollGenerator.LANES;
@@ -67,29 +80,39 @@ final class PrefixRanker {
     void rankInto(RollGenerator generator, BlockCursor cursor, RankingConvention convention, int stream,
             long index, int[] out) {
         int n = players;
-        for (int j = 0; j < prefix; j++) {
-            drawDigit(generator, stream, index, j);
+        long[] k = keys;
+        if (keysOnly) {
+            // The leading keys are the prefix keys: nothing else to draw or compute.
+            drawGroups(generator, stream, index, false);
+        } else {
+            int first = 0;
+            if (group != null) {
+                drawGroups(generator, stream, index, true);
+                first = group.digits();
+            }
+            for (int j = first; j < prefix; j++) {
+                drawDigit(generator, stream, index, j);
+            }
+            for (int d = 0; d < n; d++) {
+                k[d] = dice.prefixKey(digits[d], prefix);
+            }
         }
         drawnStream = stream;
         drawnIndex = index;
-        long[] k = keys;
-        for (int d = 0; d < n; d++) {
-            k[d] = dice.prefixKey(digits[d], prefix);
-        }
         boolean lowestFirst = convention == RankingConvention.LOWEST_FIRST;
-        int ties = 0;
+        long places = 0;
         for (int i = 0; i < n; i++) {
             long key = k[i];
             int lower = 0;
             for (int j = 0; j < n; j++) {
                 // Keys are below 2^62, so the sign of the difference is exact.
-                long diff = k[j] - key;
-                lower += (int) (diff >>> 63);
-                ties += diff == 0 ? 1 : 0;
+                lower += (int) ((k[j] - key) >>> 63);
             }
+            places |= 1L << lower;
             out[lowestFirst ? lower : n - 1 - lower] = i;
         }
-        if (ties != n) {
+        // Distinct keys take every place 0..n−1; two equal keys take the same place.
+        if (places != (n == 64 ? -1L : (1L << n) - 1)) {
             // Two dice share a sub-block: let the full comparison decide (same digits).
             LazyRanker.rankInto(generator, cursor, dice, convention, stream, index, out);
         }
@@ -103,6 +126,15 @@ final class PrefixRanker {
         int m = radix.length;
         // The leading digits are kept from the ranking of the same draw (the usual case).
         int first = drawnStream == stream && drawnIndex == index ? prefix : 0;
+        if (first == prefix && keysOnly) {
+            // The ranking kept only the keys: spell their digits now.
+            for (int d = 0; d < players; d++) {
+                dice.leadingDigits(d, keys[d], prefix, digits[d]);
+            }
+        } else if (first == 0 && group != null) {
+            drawGroups(generator, stream, index, true);
+            first = group.digits();
+        }
         for (int j = first; j < m; j++) {
             if (radix[j] == 0) {
                 // A digit of 2^63 or more: the general draw (no served set has one today).
@@ -127,6 +159,36 @@ final class PrefixRanker {
                         : BigInteger.valueOf(digits[d][j]);
             }
             faces[d] = dice.faceValue(d, spelled);
+        }
+    }
+
+    /**
+     * Draws the leading key of every die into {@code keys[d]}, one block per eight dice by the
+     * rule of {@link RollGenerator#groupValue}, and if asked spells each key's digits into
+     * {@code digits[d][0..P)}.
+     */
+    private void drawGroups(RollGenerator generator, int stream, long index, boolean spell) {
+        long product = group.product();
+        int n = players;
+        long[] k = keys;
+        for (int g = 0; g < n; g += RollGenerator.GROUP_LANES) {
+            if (product > 1) {
+                generator.block(index, RollGenerator.leadingGroupWord(stream, g), 0, 0, block);
+            }
+            int end = Math.min(n, g + RollGenerator.GROUP_LANES);
+            for (int d = g; d < end; d++) {
+                long v = 0;
+                if (product > 1) {
+                    v = BoundedSampler.lemire32(RollGenerator.groupChunkOf(block, d), product);
+                    if (v == BoundedSampler.REJECTED) {
+                        v = generator.groupValue(index, stream, d, product); // attempt 0 again, then 1, 2, …
+                    }
+                }
+                k[d] = v;
+                if (spell) {
+                    dice.leadingDigits(d, v, group.digits(), digits[d]);
+                }
+            }
         }
     }
 

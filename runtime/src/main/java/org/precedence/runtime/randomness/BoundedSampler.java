@@ -77,6 +77,25 @@ public final class BoundedSampler {
         return m >>> 16;
     }
 
+    /**
+     * One attempt of Lemire's method with a 32-bit chunk: with m = chunk·radix (below 2^64,
+     * unsigned), the attempt is rejected when {@code (m mod 2^32) < (2^32 − radix) mod radix};
+     * otherwise the value is {@code floor(m / 2^32)}. Each value is hit by exactly
+     * {@code floor(2^32 / radix)} accepted chunks.
+     *
+     * @param chunk in {@code [0, 2^32)}
+     * @param radix in {@code [1, 2^32)}
+     * @return the value in {@code [0, radix)}, or {@link #REJECTED}
+     */
+    public static long lemire32(long chunk, long radix) {
+        long m = chunk * radix;
+        long low = m & 0xFFFF_FFFFL;
+        if (low < radix && low < (0x1_0000_0000L - radix) % radix) {
+            return REJECTED;
+        }
+        return m >>> 32;
+    }
+
     /** The high 64 bits of the unsigned 128-bit product (Java 17 has only the signed one). */
     static long unsignedMultiplyHigh(long a, long b) {
         return Math.multiplyHigh(a, b) + ((a >> 63) & b) + ((b >> 63) & a);
@@ -86,7 +105,7 @@ public final class BoundedSampler {
      * One attempt of Lemire's method with a {@code bits}-bit word, for exhaustive checks on a
      * toy generator.
      *
-     * @param bits  word width, 1..31
+     * @param bits  word width, 1..32
      * @param radix in {@code [1, 2^bits)}
      */
     static long lemireNarrow(long word, long radix, int bits) {

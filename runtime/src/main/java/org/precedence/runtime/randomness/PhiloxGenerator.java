@@ -15,26 +15,36 @@ import org.apache.commons.rng.core.source64.Philox4x64;
  * and allocates nothing.
  */
 final class PhiloxGenerator extends RollGenerator {
+    /** Which draw layouts an algorithm id uses besides the wide one (docs/roll-spec.md §4). */
+    enum Layout {
+        /** Every draw a 64-bit word (v1). */
+        WIDE,
+        /** 16-bit chunks below radix 2^16 (v2). */
+        NARROW,
+        /** As NARROW, and the leading digits of multi-digit faces from one 32-bit chunk (v3). */
+        LEADING_GROUPS
+    }
+
     private final String algorithmId;
-    private final boolean narrow;
+    private final Layout layout;
     private final long key0;
     private final long key1;
 
     /** A block function with the given key words (the algorithm id only names the layout). */
     PhiloxGenerator(long key0, long key1) {
-        this(FAST_ID, true, key0, key1);
+        this(FAST_ID, Layout.LEADING_GROUPS, key0, key1);
     }
 
-    PhiloxGenerator(String algorithmId, boolean narrow, long key0, long key1) {
+    PhiloxGenerator(String algorithmId, Layout layout, long key0, long key1) {
         this.algorithmId = algorithmId;
-        this.narrow = narrow;
+        this.layout = layout;
         this.key0 = key0;
         this.key1 = key1;
     }
 
     /** Key words: little-endian 64-bit integers from bytes 0..7 and 8..15 of the derived key. */
-    static PhiloxGenerator fromKeyBytes(String algorithmId, boolean narrow, byte[] key) {
-        return new PhiloxGenerator(algorithmId, narrow, Bytes.readLongLE(key, 0), Bytes.readLongLE(key, 8));
+    static PhiloxGenerator fromKeyBytes(String algorithmId, Layout layout, byte[] key) {
+        return new PhiloxGenerator(algorithmId, layout, Bytes.readLongLE(key, 0), Bytes.readLongLE(key, 8));
     }
 
     long key0() {
@@ -52,7 +62,12 @@ final class PhiloxGenerator extends RollGenerator {
 
     @Override
     public boolean narrowDraws() {
-        return narrow;
+        return layout != Layout.WIDE;
+    }
+
+    @Override
+    public boolean leadingGroups() {
+        return layout == Layout.LEADING_GROUPS;
     }
 
     @Override

@@ -19,17 +19,29 @@ import org.precedence.api.SessionSeed;
  * {@code K = SHA-256(UTF-8(algorithmId) || 0x00 || seed)}, so the two modes never share a key
  * and a key exposed by fast-mode output reveals neither the seed nor the secure-mode key.
  *
- * <p>Two word layouts exist. The <em>wide</em> layout ({@link #word}) gives one 64-bit word per
+ * <p>Three word layouts exist. The <em>wide</em> layout ({@link #word}) gives one 64-bit word per
  * draw; every algorithm uses it for digits whose radix is at least {@link #NARROW_LIMIT}. The
- * <em>narrow</em> layout ({@link #chunk}), used by {@link #FAST_ID} for smaller radices, gives a
- * 16-bit chunk per draw, so that one block serves four consecutive draw indices of four players.
- * {@link #digit} applies the rule of this generator's algorithm id.
+ * <em>narrow</em> layout ({@link #chunk}), used by {@link #FAST_ID} and {@link #FAST_V2_ID} for
+ * smaller radices, gives a 16-bit chunk per draw, so that one block serves four consecutive draw
+ * indices of four players. The <em>leading-group</em> layout ({@link #groupChunk}), used by
+ * {@link #FAST_ID} only, gives one 32-bit chunk per die for the leading digits of a multi-digit
+ * face drawn together ({@link LeadingGroup}), so that one block serves eight dice.
+ * {@link #digit} applies the rule of this generator's algorithm id to a digit outside a
+ * leading group.
  *
  * <p>Instances are immutable and thread-safe.
  */
 public abstract class RollGenerator {
-    /** Algorithm id of the fast mode (16-bit draws for small radices); recorded in every log. */
-    public static final String FAST_ID = "precedence-roll-v2/philox4x64";
+    /**
+     * Algorithm id of the fast mode (16-bit draws for small radices, the leading digits of a
+     * multi-digit face drawn together from a 32-bit chunk); recorded in every log.
+     */
+    public static final String FAST_ID = "precedence-roll-v3/philox4x64";
+    /**
+     * The second fast algorithm: as {@link #FAST_ID} (same key) but every digit of a multi-digit
+     * face drawn on its own; still replayed, no longer the default.
+     */
+    public static final String FAST_V2_ID = "precedence-roll-v2/philox4x64";
     /** The first fast algorithm (one 64-bit word per draw); still replayed, no longer the default. */
     public static final String FAST_V1_ID = "precedence-roll-v1/philox4x64";
     /** Algorithm id of the secure mode; recorded in every log. */
@@ -37,11 +49,14 @@ public abstract class RollGenerator {
 
     /** Players served by one block: the low two bits of the player index pick the word. */
     public static final int LANES = 4;
-    /** Radices below this are drawn from 16-bit chunks under {@link #FAST_ID}. */
+    /** Radices below this are drawn from 16-bit chunks under {@link #FAST_ID} and {@link #FAST_V2_ID}. */
     public static final int NARROW_LIMIT = 1 << 16;
+    /** Dice served by one leading-group block: the low three bits of the die index pick the chunk. */
+    public static final int GROUP_LANES = 8;
     /** Every algorithm id this version implements, the default fast one first. */
-    public static final List<String> ALGORITHM_IDS = List.of(FAST_ID, FAST_V1_ID, SECURE_ID);
+    public static final List<String> ALGORITHM_IDS = List.of(FAST_ID, FAST_V2_ID, FAST_V1_ID, SECURE_ID);
     private static final long NARROW_FLAG = 1L << 31;
+    private static final long GROUP_FLAG = 1L << 30;
 
     RollGenerator() {
     }
@@ -65,8 +80,12 @@ public abstract class RollGenerator {
         Objects.requireNonNull(algorithmId, "algorithmId");
         Objects.requireNonNull(seed, "seed");
         return switch (algorithmId) {
-            case FAST_ID -> PhiloxGenerator.fromKeyBytes(FAST_ID, true, deriveKey(FAST_ID, seed));
-            case FAST_V1_ID -> PhiloxGenerator.fromKeyBytes(FAST_V1_ID, false, deriveKey(FAST_V1_ID, seed));
+            case FAST_ID -> PhiloxGenerator.fromKeyBytes(FAST_ID, PhiloxGenerator.Layout.LEADING_GROUPS,
+                    deriveKey(FAST_ID, seed));
+            case FAST_V2_ID -> PhiloxGenerator.fromKeyBytes(FAST_V2_ID, PhiloxGenerator.Layout.NARROW,
+                    deriveKey(FAST_V2_ID, seed));
+            case FAST_V1_ID -> PhiloxGenerator.fromKeyBytes(FAST_V1_ID, PhiloxGenerator.Layout.WIDE,
+                    deriveKey(FAST_V1_ID, seed));
             case SECURE_ID -> new HmacGenerator(deriveKey(SECURE_ID, seed));
             default -> throw new IllegalArgumentException("unknown roll algorithm '" + algorithmId
                     + "'; this version implements " + String.join(", ", ALGORITHM_IDS));
@@ -80,17 +99,23 @@ public abstract class RollGenerator {
 
     /** Returns the mode whose algorithm id is {@code id}, or null if the id is unknown. */
     public static RandomnessMode modeOf(String id) {
-        if (FAST_ID.equals(id) || FAST_V1_ID.equals(id)) {
+        if (FAST_ID.equals(id) || FAST_V2_ID.equals(id) || FAST_V1_ID.equals(id)) {
             return RandomnessMode.FAST;
         }
         return SECURE_ID.equals(id) ? RandomnessMode.SECURE : null;
     }
 
-    /** Returns {@code SHA-256(UTF-8(algorithmId) || 0x00 || seed bytes)}. */
+    /**
+     * Returns {@code SHA-256(UTF-8(label) || 0x00 || seed bytes)}; the label is the algorithm id,
+     * except that {@link #FAST_ID} uses the key of {@link #FAST_V2_ID}.
+     */
     static byte[] deriveKey(String algorithmId, SessionSeed seed) {
+        // v3 keeps the v2 key on purpose: a set whose faces have one digit rolls the same under
+        // both, and v3's own blocks have counters v2 never uses (bit 30 of c1).
+        String label = FAST_ID.equals(algorithmId) ? FAST_V2_ID : algorithmId;
         try {
             MessageDigest sha = MessageDigest.getInstance("SHA-256");
-            sha.update(algorithmId.getBytes(StandardCharsets.UTF_8));
+            sha.update(label.getBytes(StandardCharsets.UTF_8));
             sha.update((byte) 0);
             sha.update(seed.bytes());
             return sha.digest();
@@ -113,6 +138,14 @@ public abstract class RollGenerator {
      * chunks ({@link #chunk}) rather than 64-bit words ({@link #word}).
      */
     public boolean narrowDraws() {
+        return false;
+    }
+
+    /**
+     * Returns whether the leading digits of a multi-digit face are drawn together from one
+     * 32-bit chunk ({@link LeadingGroup}, {@link #groupChunk}) rather than digit by digit.
+     */
+    public boolean leadingGroups() {
         return false;
     }
 
@@ -172,6 +205,47 @@ public abstract class RollGenerator {
     }
 
     /**
+     * Returns counter word {@code c1} of the leading-group layout: the stream in the high 32
+     * bits, bit 30 set, the die's group of eight ({@code player >>> 3}) in the low bits. Bit 30
+     * is never set in the other layouts (their lane groups stay below 2^30).
+     */
+    public static long leadingGroupWord(int stream, int player) {
+        return ((long) stream << 32) | GROUP_FLAG | (player >>> 3);
+    }
+
+    /**
+     * Returns the 32-bit chunk of a leading-group block for a die: bits {@code 32·(player & 1)}
+     * to {@code 32·(player & 1) + 31} of word {@code (player & 7) >>> 1}.
+     */
+    public static long groupChunkOf(long[] block, int player) {
+        return (block[(player & 7) >>> 1] >>> ((player & 1) << 5)) & 0xFFFF_FFFFL;
+    }
+
+    /**
+     * Returns the 32-bit chunk for one leading-group draw: {@link #groupChunkOf} of the block at
+     * counter {@code (index, leadingGroupWord(stream, player), 0, attempt)}.
+     */
+    public long groupChunk(long index, int stream, int player, long attempt) {
+        long[] out = new long[LANES];
+        block(index, leadingGroupWord(stream, player), 0, attempt, out);
+        return groupChunkOf(out, player);
+    }
+
+    /**
+     * Returns the value in {@code [0, product)} of a die's leading group, 2 ≤ product &lt;
+     * {@link LeadingGroup#LIMIT}, drawn from chunks by {@link BoundedSampler#lemire32}, attempts
+     * 0, 1, 2, …
+     */
+    public long groupValue(long index, int stream, int player, long product) {
+        for (long attempt = 0; ; attempt++) {
+            long v = BoundedSampler.lemire32(groupChunk(index, stream, player, attempt), product);
+            if (v != BoundedSampler.REJECTED) {
+                return v;
+            }
+        }
+    }
+
+    /**
      * Returns the digit in {@code [0, radix)} with 2 ≤ radix &lt; 2^16 drawn from chunks by
      * {@link BoundedSampler#lemire16}, attempts 0, 1, 2, …
      */
@@ -185,7 +259,8 @@ public abstract class RollGenerator {
     }
 
     /**
-     * Returns digit {@code digit} of {@code player} in draw (index, stream): exactly uniform in
+     * Returns digit {@code digit} of {@code player} in draw (index, stream), for a digit outside
+     * any leading group (every digit unless {@link #leadingGroups()}): exactly uniform in
      * {@code [0, radix)} by this algorithm's rule (narrow chunks when {@link #narrowDraws()} and
      * the radix is below {@link #NARROW_LIMIT}, otherwise {@link BoundedSampler#draw} on
      * {@link #word}).

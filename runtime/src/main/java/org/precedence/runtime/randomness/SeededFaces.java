@@ -7,7 +7,9 @@ import org.precedence.runtime.dice.MixedRadixDice;
 /**
  * The faces of one draw (one index on one stream) of a set: digit j of die d is drawn, the
  * first time it is asked for, exactly as {@link RollGenerator#digit} draws it (16-bit chunks
- * or 64-bit words, by the algorithm and the radix), and remembered. Because every digit is
+ * or 64-bit words, by the algorithm and the radix), and remembered; under an algorithm with
+ * {@link RollGenerator#leadingGroups() leading groups}, a digit of the die's {@link
+ * LeadingGroup} is drawn with the rest of the group by {@link RollGenerator#groupValue}. Because every digit is
  * a pure function of its coordinates, the faces do not depend on which digits are asked for
  * first, or whether they are asked for at all.
  *
@@ -21,6 +23,8 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
     private final int stream;
     private final boolean narrow;
     private final BigInteger[][] memo;
+    /** Per die, its leading group (null: the algorithm draws every digit on its own). */
+    private final LeadingGroup[] groups;
     private final long[] block = new long[RollGenerator.LANES];
     private long c0;
     private long c1;
@@ -56,11 +60,23 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
         this.stream = stream;
         this.narrow = generator.narrowDraws();
         this.memo = new BigInteger[dice.players()][dice.digits()];
+        if (generator.leadingGroups() && dice.digits() > 1) {
+            this.groups = new LeadingGroup[dice.players()];
+            for (int d = 0; d < groups.length; d++) {
+                groups[d] = LeadingGroup.of(dice, d);
+            }
+        } else {
+            this.groups = null;
+        }
     }
 
     @Override
     public BigInteger digit(int die, int digit) {
         BigInteger d = memo[die][digit];
+        if (d == null && groups != null && digit < groups[die].digits()) {
+            drawGroup(die);
+            return memo[die][digit];
+        }
         if (d == null) {
             BigInteger radix = dice.radix(die, digit);
             if (narrow && radix.signum() > 0 && radix.bitLength() <= 16) {
@@ -102,12 +118,35 @@ public final class SeededFaces implements MixedRadixDice.FaceDigits {
         return d;
     }
 
+    /** Draws die {@code die}'s leading group and remembers each of its digits. */
+    private void drawGroup(int die) {
+        LeadingGroup group = groups[die];
+        long product = group.product();
+        long value = 0;
+        if (product > 1) {
+            // The rule of RollGenerator.groupValue, through this draw's block memo.
+            for (long attempt = 0; ; attempt++) {
+                long[] b = block(index, RollGenerator.leadingGroupWord(stream, die), 0, attempt);
+                value = BoundedSampler.lemire32(RollGenerator.groupChunkOf(b, die), product);
+                if (value != BoundedSampler.REJECTED) {
+                    break;
+                }
+            }
+        }
+        long[] split = new long[group.digits()];
+        dice.leadingDigits(die, value, split.length, split);
+        for (int j = 0; j < split.length; j++) {
+            memo[die][j] = BigInteger.valueOf(split[j]);
+        }
+        digitsDrawn += split.length;
+    }
+
     /** The wide word for (die, digit, attempt): word {@code die & 3} of its block. */
     private long word(int die, int digit, long attempt) {
         return block(index, RollGenerator.groupWord(stream, die), digit, attempt)[die & 3];
     }
 
-    /** The block at a counter; remembers the last one, which serves four dice. */
+    /** The block at a counter; remembers the last one, which serves four dice (eight for groups). */
     private long[] block(long a, long b, long c, long e) {
         if (!blockValid || c0 != a || c1 != b || c2 != c || c3 != e) {
             if (cursor != null) {

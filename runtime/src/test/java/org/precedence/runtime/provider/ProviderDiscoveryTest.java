@@ -16,7 +16,7 @@ class ProviderDiscoveryTest {
     void load_findsTheFairDiceProvider() {
         TurnOrderProvider provider = TurnOrderProvider.load();
         assertInstanceOf(FairDiceProvider.class, provider);
-        assertTrue(provider.name().contains("precedence-roll-v2/philox4x64"));
+        assertTrue(provider.name().contains("precedence-roll-v3/philox4x64"));
         assertTrue(provider.maxPlayers() >= 4);
         TurnOrderSource source = provider.open(SessionSpec.of(SessionSeed.fromText("discovery")));
         List<String> order = source.order(0, List.of("fen", "moss", "reed", "sedge"));

@@ -32,6 +32,48 @@ class BoundedSamplerTest {
         }
     }
 
+    // Lemire's method on 32-bit chunks, the leading-group rule: the same arithmetic as the toy
+    // rule at width 32 (proven exactly uniform at widths 4, 8 and 16 above and below), at every
+    // boundary of the chunk and of the product, for radices of every size below 2^32.
+    @Test
+    void lemire32_agreesWithTheRuleAtWidth32() {
+        SplittableRandom random = new SplittableRandom(3232L); // fixed seed: inputs only
+        long[] radices = {1, 2, 3, 5, 6, 7, 12, 720, 20160, 14515200, (1L << 24) - 1, 1L << 31, (1L << 31) + 1,
+            3_000_000_000L, (1L << 32) - 1};
+        for (long r : radices) {
+            for (int i = 0; i < 20_000; i++) {
+                long x = i < 4 ? new long[] {0, 1, (1L << 32) - 2, (1L << 32) - 1}[i] : random.nextLong() >>> 32;
+                assertEquals(BoundedSampler.lemireNarrow(x, r, 32), BoundedSampler.lemire32(x, r),
+                        "radix " + r + ", chunk " + x);
+            }
+        }
+    }
+
+    // Exhaustive over all 2^32 chunks for the radix the ten-player set's leading group uses
+    // (2 · 10! · 2 = 14,515,200; 10! = 3,628,800, OEIS A000142): every value is accepted for
+    // exactly floor(2^32 / r) = 295 chunks and 2^32 mod r = 12,983,296 chunks are rejected.
+    @Test
+    void lemire32_isExactlyUniformOnEveryChunkForTheTenPlayerGroup() {
+        long r = 2L * 3_628_800L * 2L;
+        int[] hits = new int[(int) r];
+        long rejected = 0;
+        for (long x = 0; x < 1L << 32; x++) {
+            long v = BoundedSampler.lemire32(x, r);
+            if (v == BoundedSampler.REJECTED) {
+                rejected++;
+            } else {
+                hits[(int) v]++;
+            }
+        }
+        assertEquals((1L << 32) % r, rejected);
+        assertEquals(12_983_296L, rejected);
+        for (int v = 0; v < r; v++) {
+            if (hits[v] != 295) {
+                assertEquals(295, hits[v], "value " + v);
+            }
+        }
+    }
+
     // Exhaustive over all 2^16 chunks (Lemire, ACM TOMACS 29(1), 2019: each value is accepted
     // for exactly floor(2^16 / r) chunks): every radix up to 600, the catalog's side counts and
     // radices near 2^16, where rejection is likeliest (43691 rejects a third of the chunks).

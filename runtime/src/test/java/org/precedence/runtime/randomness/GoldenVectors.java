@@ -28,14 +28,20 @@ import org.precedence.runtime.source.SetSource;
  * Computes the golden vectors. Run once per algorithm generation to create its committed file
  * (never to "fix" one: the committed vectors are a promise, and changing them needs a new
  * algorithm id):
- * {@code java -cp ... org.precedence.runtime.randomness.GoldenVectors v1|v2 runtime/src/test/resources/.../FILE}.
+ * {@code java -cp ... org.precedence.runtime.randomness.GoldenVectors v1|v2|v3 runtime/src/test/resources/.../FILE}.
  * {@link #V1} ({@code golden-vectors.json}) pins {@code precedence-roll-v1/philox4x64} and the
  * secure mode; {@link #V2} ({@code golden-vectors-v2.json}) pins
- * {@code precedence-roll-v2/philox4x64}, with the secure mode again so that it stands alone.
+ * {@code precedence-roll-v2/philox4x64}, with the secure mode again so that it stands alone;
+ * {@link #V3} ({@code golden-vectors-v3.json}) pins {@code precedence-roll-v3/philox4x64}, again
+ * with the secure mode, and adds leading-group blocks, group values and whole rounds of the
+ * constructed sets for 7 and 10 players.
  */
 public final class GoldenVectors {
     /** One generation of vectors: its file, its fast algorithm id and what it samples. */
     record Generation(String resource, String fastId, long[][] counters, BigInteger[] radices, int digitCount) {
+        boolean leadingGroups() {
+            return fastId.equals(RollGenerator.FAST_ID);
+        }
     }
 
     static final String RESOURCE = "golden-vectors.json";
@@ -52,13 +58,29 @@ public final class GoldenVectors {
      * v2 adds a narrow-layout counter (the block of rounds 0–3 of players 0–3) and radices at
      * both sides of 2^16, among them 43691, whose 16-bit draws are rejected a third of the time.
      */
-    static final Generation V2 = new Generation("golden-vectors-v2.json", RollGenerator.FAST_ID,
+    static final Generation V2 = new Generation("golden-vectors-v2.json", RollGenerator.FAST_V2_ID,
         new long[][] {{0, 0, 0, 0}, {0, 1L << 31, 0, 0}, {1, 1L << 31, 0, 0}, {1_000_000_000L, (1L << 32) | 2, 1, 3},
             {-1, -1, -1, -1}},
         new BigInteger[] {BigInteger.TWO, BigInteger.valueOf(6), BigInteger.valueOf(120), BigInteger.valueOf(1152),
             BigInteger.valueOf(43691), BigInteger.valueOf(65535), BigInteger.valueOf(65536),
             BigInteger.ONE.shiftLeft(62).add(BigInteger.valueOf(3)), BigInteger.ONE.shiftLeft(100).add(BigInteger.ONE)},
         2 * 2 * 9 * 2);
+
+    /**
+     * v3 adds leading-group counters (bit 30 of c1: dice 0–7 and 8–15 of round 0, and stream 1)
+     * to the v2 sections, group values for the products of the served constructions, and whole
+     * rounds of the constructed sets for 7 and 10 players.
+     */
+    static final Generation V3 = new Generation("golden-vectors-v3.json", RollGenerator.FAST_ID,
+        new long[][] {{0, 0, 0, 0}, {0, 1L << 31, 0, 0}, {1, 1L << 31, 0, 0}, {0, 1L << 30, 0, 0},
+            {0, (1L << 30) | 1, 0, 0}, {9, (1L << 32) | (1L << 30), 0, 1}, {1_000_000_000L, (1L << 32) | 2, 1, 3},
+            {-1, -1, -1, -1}},
+        V2.radices(), V2.digitCount());
+    /** Leading-group products: a toy one, the 7-, 8- and 10-player groups, and the largest allowed. */
+    static final long[] GROUP_PRODUCTS = {12, 20_160, 161_280, 14_515_200, (1L << 24) - 1};
+    /** Player counts whose standard (constructed) sets get whole rounds in the v3 file. */
+    static final int[] CONSTRUCTED_PLAYERS = {7, 10};
+    static final long[] CONSTRUCTED_ROUNDS = {0, 1, 2, 3, 7, 1_000_000_000L, 1L << 62};
 
     private GoldenVectors() {
     }
@@ -104,6 +126,34 @@ public final class GoldenVectors {
             faces.add(p.faceValue().toString());
         }
         o.add("faceIndices", faceIndices);
+        o.add("faces", faces);
+        JsonArray order = new JsonArray();
+        r.order().forEach(order::add);
+        o.add("order", order);
+        return o;
+    }
+
+    /** A whole round of the standard set for {@code players} (constructed for 7 and more). */
+    static JsonObject constructedRoll(String algorithmId, SessionSeed seed, int players, OrderRule rule,
+            RankingConvention convention, long round) {
+        RandomnessMode mode = RollGenerator.modeOf(algorithmId);
+        DiceSession s = DiceSession.open(new SessionSpec(seed, mode, rule, convention),
+                org.precedence.runtime.provider.FairDiceProvider.standardSets(), algorithmId);
+        MixedRadixDice dice = s.setFor(players);
+        RoundResult r = s.roll(round, players);
+        JsonObject o = new JsonObject();
+        o.addProperty("algorithm", algorithmId);
+        o.addProperty("seed", seed.toHex());
+        o.addProperty("players", players);
+        o.addProperty("set", dice.id());
+        o.addProperty("setSha256", dice.sha256());
+        o.addProperty("rule", rule.name());
+        o.addProperty("convention", convention.name());
+        o.addProperty("round", round);
+        JsonArray faces = new JsonArray();
+        for (PlayerRoll p : r.rolls()) {
+            faces.add(p.faceValue().toString());
+        }
         o.add("faces", faces);
         JsonArray order = new JsonArray();
         r.order().forEach(order::add);
@@ -179,6 +229,40 @@ public final class GoldenVectors {
         root.add("blocks", blocks);
         root.add("digits", digits);
         root.add("rolls", rolls);
+        if (gen.leadingGroups()) {
+            JsonArray groupValues = new JsonArray();
+            JsonArray constructed = new JsonArray();
+            for (SessionSeed seed : SEEDS) {
+                RollGenerator g = RollGenerator.of(gen.fastId(), seed);
+                for (long product : GROUP_PRODUCTS) {
+                    for (int player : new int[] {0, 5, 9}) {
+                        JsonObject v = new JsonObject();
+                        v.addProperty("algorithm", g.algorithmId());
+                        v.addProperty("seed", seed.toHex());
+                        v.addProperty("index", 9);
+                        v.addProperty("stream", 1);
+                        v.addProperty("player", player);
+                        v.addProperty("product", product);
+                        v.addProperty("value", g.groupValue(9, 1, player, product));
+                        groupValues.add(v);
+                    }
+                }
+                for (int players : CONSTRUCTED_PLAYERS) {
+                    for (OrderRule rule : OrderRule.values()) {
+                        for (RankingConvention convention : RankingConvention.values()) {
+                            if (rule != OrderRule.FRESH_EACH_ROUND && convention == RankingConvention.HIGHEST_FIRST) {
+                                continue;
+                            }
+                            for (long round : CONSTRUCTED_ROUNDS) {
+                                constructed.add(constructedRoll(gen.fastId(), seed, players, rule, convention, round));
+                            }
+                        }
+                    }
+                }
+            }
+            root.add("groupValues", groupValues);
+            root.add("constructedRolls", constructed);
+        }
         return root;
     }
 
@@ -198,7 +282,8 @@ public final class GoldenVectors {
         Generation gen = switch (args[0]) {
             case "v1" -> V1;
             case "v2" -> V2;
-            default -> throw new IllegalArgumentException("generation must be v1 or v2, got " + args[0]);
+            case "v3" -> V3;
+            default -> throw new IllegalArgumentException("generation must be v1, v2 or v3, got " + args[0]);
         };
         SessionLogFiles.writeAtomically(Path.of(args[1]), text(gen));
     }

@@ -102,11 +102,15 @@ class RollGeneratorTest {
         assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
                 HEX.formatHex(sha.digest("abc".getBytes(StandardCharsets.US_ASCII))));
         SessionSeed seed = SessionSeed.fromText("key derivation");
-        byte[] id = RollGenerator.FAST_ID.getBytes(StandardCharsets.UTF_8);
-        byte[] input = new byte[id.length + 1 + 32];
-        System.arraycopy(id, 0, input, 0, id.length);
-        System.arraycopy(seed.bytes(), 0, input, id.length + 1, 32);
-        assertArrayEquals(sha.digest(input), RollGenerator.deriveKey(RollGenerator.FAST_ID, seed));
+        for (String algorithm : RollGenerator.ALGORITHM_IDS) {
+            // v3 is keyed as v2 (single-digit faces roll the same under both); the others by their own id.
+            String label = algorithm.equals(RollGenerator.FAST_ID) ? RollGenerator.FAST_V2_ID : algorithm;
+            byte[] id = label.getBytes(StandardCharsets.UTF_8);
+            byte[] input = new byte[id.length + 1 + 32];
+            System.arraycopy(id, 0, input, 0, id.length);
+            System.arraycopy(seed.bytes(), 0, input, id.length + 1, 32);
+            assertArrayEquals(sha.digest(input), RollGenerator.deriveKey(algorithm, seed), algorithm);
+        }
     }
 
     @Test
@@ -115,7 +119,9 @@ class RollGeneratorTest {
         RollGenerator fast = RollGenerator.of(RandomnessMode.FAST, seed);
         RollGenerator secure = RollGenerator.of(RandomnessMode.SECURE, seed);
         RollGenerator fastV1 = RollGenerator.of(RollGenerator.FAST_V1_ID, seed);
-        assertEquals("precedence-roll-v2/philox4x64", fast.algorithmId());
+        RollGenerator fastV2 = RollGenerator.of(RollGenerator.FAST_V2_ID, seed);
+        assertEquals("precedence-roll-v3/philox4x64", fast.algorithmId());
+        assertEquals("precedence-roll-v2/philox4x64", fastV2.algorithmId());
         assertEquals("precedence-roll-v1/philox4x64", fastV1.algorithmId());
         assertEquals("precedence-roll-v1/hmac-sha256", secure.algorithmId());
         assertEquals(RandomnessMode.SECURE, RollGenerator.modeOf(secure.algorithmId()));
@@ -124,9 +130,17 @@ class RollGeneratorTest {
         assertNotEquals(fast.word(0, 0, 0, 0, 0), secure.word(0, 0, 0, 0, 0));
         // The algorithm id is part of the key, so v1 and v2 never share words either.
         assertNotEquals(fast.word(0, 0, 0, 0, 0), fastV1.word(0, 0, 0, 0, 0));
+        // v3 shares the v2 key on purpose: its own draws live at counters v2 never uses.
+        assertEquals(fastV2.word(3, 1, 5, 2, 0), fast.word(3, 1, 5, 2, 0));
+        assertEquals(RandomnessMode.FAST, RollGenerator.modeOf(fastV2.algorithmId()));
         assertTrue(fast.narrowDraws());
+        assertTrue(fastV2.narrowDraws());
         assertFalse(fastV1.narrowDraws());
         assertFalse(secure.narrowDraws());
+        assertTrue(fast.leadingGroups());
+        assertFalse(fastV2.leadingGroups());
+        assertFalse(fastV1.leadingGroups());
+        assertFalse(secure.leadingGroups());
     }
 
     @Test

@@ -16,6 +16,9 @@ import org.precedence.runtime.dice.Word;
 
 class SeededFacesTest {
     private static final RollGenerator GENERATOR = RollGenerator.of(RandomnessMode.FAST, SessionSeed.fromText("faces"));
+    /** Draws every digit on its own, so laziness shows digit by digit. */
+    private static final RollGenerator DIGIT_BY_DIGIT = RollGenerator.of(RollGenerator.FAST_V2_ID,
+            SessionSeed.fromText("faces"));
 
     static TwoLevelDice threeDiceAllRelabelings() {
         List<int[]> perms = new ArrayList<>();
@@ -58,7 +61,7 @@ class SeededFacesTest {
         TwoLevelDice dice = threeDiceAllRelabelings();
         int lazyCompares = 0;
         for (long index = 0; index < 500; index++) {
-            SeededFaces faces = new SeededFaces(GENERATOR, dice, index, 0);
+            SeededFaces faces = new SeededFaces(DIGIT_BY_DIGIT, dice, index, 0);
             int c = dice.compare(0, 1, faces);
             boolean sameBlock = faces.digit(0, 0).equals(faces.digit(1, 0));
             assertEquals(sameBlock ? 4 : 2, faces.digitsDrawn(), "round " + index);
@@ -67,6 +70,23 @@ class SeededFacesTest {
             assertEquals(Integer.signum(faces.faceValue(0).compareTo(faces.faceValue(1))), Integer.signum(c));
         }
         assertTrue(lazyCompares > 300, "most comparisons are settled by the block digit");
+    }
+
+    @Test
+    void leadingGroup_isDrawnTogetherFromItsOwnChunk() {
+        TwoLevelDice dice = threeDiceAllRelabelings();
+        for (long index = 0; index < 300; index++) {
+            SeededFaces faces = new SeededFaces(GENERATOR, dice, index, 0);
+            faces.digit(1, 1);
+            // Both digits (radices 6 and 2: product 12 < 2^24) come with the group, nothing else.
+            assertEquals(2, faces.digitsDrawn());
+            long key = GENERATOR.groupValue(index, 0, 1, 12);
+            // TwoLevelDice numbers leading strings plainly: key = 2·block + position.
+            assertEquals(BigInteger.valueOf(key / 2), faces.digit(1, 0));
+            assertEquals(BigInteger.valueOf(key % 2), faces.digit(1, 1));
+            SeededFaces again = new SeededFaces(GENERATOR, dice, index, 0);
+            assertEquals(faces.faceValue(1), again.faceValue(1));
+        }
     }
 
     @Test

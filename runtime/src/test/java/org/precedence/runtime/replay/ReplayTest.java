@@ -150,7 +150,7 @@ class ReplayTest {
         SessionLog log = SessionLogFiles.fromJson(json);
         String face = log.rounds().get(0).faces().get(0);
         assertMalformed(edit(json, "\"" + face + "\"", "\"x" + face + "\""), "must be a decimal number");
-        assertMalformed(edit(json, "\"algorithm\": \"precedence-roll-v2/philox4x64\"", "\"algorithm\": 7"),
+        assertMalformed(edit(json, "\"algorithm\": \"precedence-roll-v3/philox4x64\"", "\"algorithm\": 7"),
                 "'algorithm' must be a string");
     }
 
@@ -168,7 +168,7 @@ class ReplayTest {
             ReplayReport report = REPLAYER.verify(log, Optional.empty());
             assertTrue(report.ok(), () -> report.mismatch().get().describe());
             assertEquals(8, report.roundsChecked());
-            // The same log relabelled as v2 no longer matches: the id really selects the algorithm.
+            // The same log relabelled as v3 no longer matches: the id really selects the algorithm.
             SessionLog relabelled = SessionLogFiles.fromJson(SessionLogFiles.toJson(recorder.log(true))
                     .replace(RollGenerator.FAST_V1_ID, RollGenerator.FAST_ID));
             assertFalse(REPLAYER.verify(relabelled, Optional.empty()).ok(), rule.toString());
@@ -178,7 +178,7 @@ class ReplayTest {
     @Test
     void verify_rejectsUnknownAlgorithmAndBadSizes() {
         String json = SessionLogFiles.toJson(recorded(RandomnessMode.FAST, OrderRule.FRESH_EACH_ROUND));
-        SessionLog unknown = SessionLogFiles.fromJson(edit(json, "precedence-roll-v2/philox4x64", "precedence-roll-v9/x"));
+        SessionLog unknown = SessionLogFiles.fromJson(edit(json, "precedence-roll-v3/philox4x64", "precedence-roll-v9/x"));
         MalformedLogException bad = assertThrows(MalformedLogException.class,
                 () -> REPLAYER.verify(unknown, Optional.empty()));
         assertTrue(bad.getMessage().contains("unknown algorithm 'precedence-roll-v9/x'"), bad.getMessage());
