@@ -8,7 +8,7 @@
  * <p>The default sets are {@link org.precedence.runtime.source.SetSources#standard()}, with every
  * set of at most 65,536 faces rolled as its explicit list of faces (id suffix {@code /listed}).
  *
- * <p>Sessions roll with the current algorithm of their mode ({@code precedence-roll-v2/philox4x64}
+ * <p>Sessions roll with the current algorithm of their mode ({@code precedence-roll-v3/philox4x64}
  * fast, {@code precedence-roll-v1/hmac-sha256} secure; see {@code docs/roll-spec.md});
  * {@link org.precedence.runtime.provider.DiceSession#open(org.precedence.api.SessionSpec,
  * org.precedence.runtime.source.SetSource, String)} opens one with an earlier algorithm id, to

@@ -155,7 +155,7 @@ class ReplayTest {
     }
 
     @Test
-    void replay_v1LogReplaysWithV1AndIsNotAV2Log() {
+    void replay_v1LogReplaysWithV1AndIsNotAV3Log() {
         for (OrderRule rule : OrderRule.values()) {
             DiceSession v1 = DiceSession.open(new SessionSpec(SEED, RandomnessMode.FAST, rule,
                     RankingConvention.LOWEST_FIRST), TestSets.INSTANCE, RollGenerator.FAST_V1_ID);
@@ -173,6 +173,35 @@ class ReplayTest {
                     .replace(RollGenerator.FAST_V1_ID, RollGenerator.FAST_ID));
             assertFalse(REPLAYER.verify(relabelled, Optional.empty()).ok(), rule.toString());
         }
+    }
+
+    /**
+     * A v2 log of 10 players (a constructed set, where v3 draws differently) replays with v2;
+     * relabelled as v3 it fails, while a 3-player round (single-digit faces) is the same under both.
+     */
+    @Test
+    void replay_v2LogOfConstructedSetReplaysWithV2Only() {
+        org.precedence.runtime.source.SetSource standard = org.precedence.runtime.provider.FairDiceProvider
+                .standardSets();
+        Replayer replayer = new Replayer(standard);
+        DiceSession v2 = DiceSession.open(SessionSpec.of(SEED), standard, RollGenerator.FAST_V2_ID);
+        List<String> ten = List.of("Quill", "Bramble", "Tamsin", "Orrin", "Pell", "Wick", "Sorrel", "Juno", "Fable",
+                "Lark");
+        SessionRecorder recorder = new SessionRecorder(v2);
+        for (long k = 0; k < 6; k++) {
+            recorder.play(k, ten);
+        }
+        String json = SessionLogFiles.toJson(recorder.log(true));
+        ReplayReport report = replayer.verify(SessionLogFiles.fromJson(json), Optional.empty());
+        assertTrue(report.ok(), () -> report.mismatch().get().describe());
+        assertEquals(6, report.roundsChecked());
+        SessionLog asV3 = SessionLogFiles.fromJson(json.replace(RollGenerator.FAST_V2_ID, RollGenerator.FAST_ID));
+        assertFalse(replayer.verify(asV3, Optional.empty()).ok());
+
+        SessionRecorder three = new SessionRecorder(v2);
+        three.play(0, List.of("Quill", "Bramble", "Tamsin"));
+        String small = SessionLogFiles.toJson(three.log(true)).replace(RollGenerator.FAST_V2_ID, RollGenerator.FAST_ID);
+        assertTrue(replayer.verify(SessionLogFiles.fromJson(small), Optional.empty()).ok());
     }
 
     @Test
