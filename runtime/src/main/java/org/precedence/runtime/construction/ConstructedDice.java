@@ -1,6 +1,9 @@
 package org.precedence.runtime.construction;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
 import java.math.BigInteger;
+import java.nio.ByteOrder;
 import java.util.List;
 import org.precedence.api.FairnessGrade;
 import org.precedence.runtime.dice.MixedRadixDice;
@@ -20,8 +23,12 @@ import org.precedence.runtime.dice.MixedRadixDice;
  * implicit (S_n, A_n, AGL, PGL) or a shared table (M11, M12).
  */
 public final class ConstructedDice implements MixedRadixDice {
+    private static final VarHandle BIG_ENDIAN_LONGS = MethodHandles.byteArrayViewVarHandle(long[].class,
+            ByteOrder.BIG_ENDIAN);
     private final Construction construction;
     private final int players;
+    /** Made once: every round reports it, and the construction never changes. */
+    private final String id;
     /** Levels in digit order: element 0 is the top level. */
     private final Level[] byDigit;
     private final BigInteger[] radix;
@@ -43,6 +50,8 @@ public final class ConstructedDice implements MixedRadixDice {
     private final long[] longRadix;
     /** {@code flushBefore[j]}: the long face path starts a new 62-bit chunk at digit j. */
     private final boolean[] flushBefore;
+    /** As {@link #flushBefore} for the face index, over every digit (the start digit too). */
+    private final boolean[] indexFlushBefore;
     /** Limbs (64-bit, least significant first) enough for any face value. */
     private final int limbs;
     private volatile List<FamilyProof> proofs;
@@ -56,6 +65,7 @@ public final class ConstructedDice implements MixedRadixDice {
     public ConstructedDice(Construction construction) {
         this.construction = construction;
         this.players = construction.players();
+        this.id = "construction-" + players + ":" + construction.method().replace(" · ", "+");
         List<Level> levels = construction.levels();
         int l = levels.size();
         int m = construction.start().sidesPerDie();
@@ -96,6 +106,15 @@ public final class ConstructedDice implements MixedRadixDice {
         for (int j = 0; j < l && fits; j++) {
             if (Long.MAX_VALUE / lr[j] <= chunkProduct) {
                 flushBefore[j] = true;
+                chunkProduct = 1;
+            }
+            chunkProduct *= lr[j];
+        }
+        this.indexFlushBefore = new boolean[radix.length];
+        chunkProduct = 1;
+        for (int j = 0; j < radix.length && fits; j++) {
+            if (Long.MAX_VALUE / lr[j] <= chunkProduct) {
+                indexFlushBefore[j] = true;
                 chunkProduct = 1;
             }
             chunkProduct *= lr[j];
@@ -150,7 +169,7 @@ public final class ConstructedDice implements MixedRadixDice {
 
     @Override
     public String id() {
-        return "construction-" + players + ":" + construction.method().replace(" · ", "+");
+        return id;
     }
 
     @Override
@@ -359,12 +378,60 @@ public final class ConstructedDice implements MixedRadixDice {
         long length = (long) players * m;
         long inner = startPosition[letter][face];
         mulAdd(limbs, length, (negative ? length - 1 - inner : inner) + 1);
-        byte[] bytes = new byte[this.limbs * 8];
-        for (int i = 0; i < this.limbs; i++) {
-            long w = limbs[i];
-            for (int b = 0; b < 8; b++) {
-                bytes[bytes.length - 1 - (i * 8 + b)] = (byte) (w >>> (8 * b));
+        return toBigInteger(limbs);
+    }
+
+    /**
+     * Returns the face index of a face given by its digits (most significant first): the
+     * mixed-radix number they spell, {@code Σ digits[j] · R_{j+1} · … · R_{m−1}} (the face
+     * index of {@link MixedRadixDice}), computed on 64-bit limbs ({@code limbs}: scratch of at
+     * least {@link #faceLimbs()} longs).
+     *
+     * @throws IllegalStateException    if the set has a radix of 2^62 or more ({@link #hasLongDigits()})
+     * @throws IllegalArgumentException if there are too few digits or one is outside its radix
+     */
+    public BigInteger faceIndex(long[] digits, long[] limbs) {
+        if (longRadix == null) {
+            throw new IllegalStateException(id() + " has digits of 2^62 or more");
+        }
+        if (digits.length < longRadix.length) {
+            throw new IllegalArgumentException("a face has " + longRadix.length + " digits, got " + digits.length);
+        }
+        java.util.Arrays.fill(limbs, 0, this.limbs, 0);
+        long chunk = 0;
+        long chunkRadix = 1;
+        for (int j = 0; j < longRadix.length; j++) {
+            long r = longRadix[j];
+            long d = digits[j];
+            if (d < 0 || d >= r) {
+                throw new IllegalArgumentException("digit " + j + " must be in 0.." + (r - 1) + ", got " + d);
             }
+            if (indexFlushBefore[j]) {
+                mulAdd(limbs, chunkRadix, chunk);
+                chunk = 0;
+                chunkRadix = 1;
+            }
+            chunk = chunk * r + d;
+            chunkRadix *= r;
+        }
+        mulAdd(limbs, chunkRadix, chunk);
+        return toBigInteger(limbs);
+    }
+
+    /** The non-negative number whose unsigned 64-bit limbs, least significant first, are {@code x[0..limbs)}. */
+    private BigInteger toBigInteger(long[] x) {
+        int top = limbs - 1;
+        while (top > 0 && x[top] == 0) {
+            top--;
+        }
+        if (top == 0 && x[0] >= 0) {
+            return BigInteger.valueOf(x[0]);
+        }
+        // Only the limbs in use, each written big-endian by one store: the BigInteger
+        // constructor's cost grows with the length of the magnitude it is given.
+        byte[] bytes = new byte[(top + 1) * Long.BYTES];
+        for (int i = 0; i <= top; i++) {
+            BIG_ENDIAN_LONGS.set(bytes, (top - i) * Long.BYTES, x[i]);
         }
         return new BigInteger(1, bytes);
     }

@@ -93,9 +93,9 @@ final class Lehmer {
             if (c == rank) {
                 return j;
             }
-            if (c < rank) {
-                rank--;
-            }
+            // Branch-free (c < rank exactly when c − rank is negative; both are below n): the
+            // digits are random, so a branch here would often mispredict.
+            rank -= (c - rank) >>> 31;
         }
         throw new IllegalStateException("index " + index + " does not code a permutation of " + n);
     }

@@ -1,13 +1,17 @@
 package org.precedence.runtime.provider;
 
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
+import java.util.concurrent.ConcurrentHashMap;
 import org.precedence.api.FairnessGrade;
 import org.precedence.api.PlayerRoll;
 import org.precedence.api.RoundResult;
 import org.precedence.api.SessionSpec;
 import org.precedence.api.TurnOrderSource;
+import org.precedence.runtime.construction.ConstructedDice;
 import org.precedence.runtime.dice.DieNames;
 import org.precedence.runtime.dice.MixedRadixDice;
 import org.precedence.runtime.randomness.RollGenerator;
@@ -23,12 +27,16 @@ import org.precedence.runtime.source.SetSource;
  * may join or leave between any two rounds; what a rule guarantees across rounds holds among
  * the rounds played with the same count (see {@link org.precedence.api.OrderRule}).
  *
- * <p>Immutable and thread-safe.
+ * <p>Immutable in all it returns, and thread-safe: the only state it keeps is a concurrent cache
+ * of per-set {@link PrefixPlan}s, which are immutable and depend only on the set and the
+ * algorithm.
  */
 public final class DiceSession implements TurnOrderSource {
     private final SessionSpec spec;
     private final SetSource sets;
     private final RollGenerator generator;
+    /** Per player count, the prefix plan of the constructed set last served for it. */
+    private final Map<Integer, PrefixPlan> prefixPlans = new ConcurrentHashMap<>();
 
     DiceSession(SessionSpec spec, SetSource sets) {
         this(spec, sets, RollGenerator.algorithmId(Objects.requireNonNull(spec, "spec").mode()));
@@ -107,6 +115,10 @@ public final class DiceSession implements TurnOrderSource {
      * FRESH_EACH_ROUND and BALANCED_LEAD, round 0 for FIRST_PLAYER_THEN_SEATING and SNAKE);
      * each roll's position is the player's place in this round's order.
      *
+     * <p>A constructed set is ranked by its dice's prefix keys and its faces are computed on
+     * long digits ({@link PrefixRanker}); any other set by the lazy digit-by-digit comparison
+     * (the general path). Both give the same round for the same set (tested).
+     *
      * @throws IllegalArgumentException if {@code round < 0} or the count is outside
      *                                  2..{@link #maxPlayers()}
      */
@@ -114,28 +126,89 @@ public final class DiceSession implements TurnOrderSource {
     public RoundResult roll(long round, int playerCount) {
         Validation.requireRound(round);
         MixedRadixDice dice = setFor(playerCount);
+        return dice instanceof ConstructedDice constructed ? rollByPrefixKeys(round, constructed)
+                : rollLazily(round, dice);
+    }
+
+    /**
+     * Returns round {@code round} as {@link #roll} does, by the general path whatever the set:
+     * ranked by {@link LazyRanker}, faces from its {@link SeededFaces}. For tests, which pin the
+     * prefix path of constructed sets to it.
+     */
+    RoundResult rollLazily(long round, int playerCount) {
+        Validation.requireRound(round);
+        return rollLazily(round, setFor(playerCount));
+    }
+
+    private RoundResult rollLazily(long round, MixedRadixDice dice) {
+        int n = dice.players();
         long shownIndex = Streams.facesIndex(spec.rule(), round);
         SeededFaces[] shown = new SeededFaces[1];
-        Ranker ranker = (stream, index, n, out) -> {
+        Ranker ranker = (stream, index, players, out) -> {
             SeededFaces f = LazyRanker.rankInto(generator, dice, spec.convention(), stream, index, out);
             if (stream == Streams.ROUND && index == shownIndex) {
                 shown[0] = f;
             }
         };
-        int[] order = new int[playerCount];
-        RuleOrders.orderInto(spec.rule(), round, playerCount, ranker, order, new int[playerCount]);
+        int[] order = new int[n];
+        RuleOrders.orderInto(spec.rule(), round, n, ranker, order, new int[n]);
         SeededFaces faces = shown[0];
-        int[] position = new int[playerCount];
-        List<Integer> orderList = new ArrayList<>(playerCount);
-        for (int p = 0; p < playerCount; p++) {
+        int[] position = new int[n];
+        List<Integer> orderList = new ArrayList<>(n);
+        for (int p = 0; p < n; p++) {
             position[order[p]] = p;
             orderList.add(order[p]);
         }
-        List<PlayerRoll> rolls = new ArrayList<>(playerCount);
-        for (int d = 0; d < playerCount; d++) {
+        List<PlayerRoll> rolls = new ArrayList<>(n);
+        for (int d = 0; d < n; d++) {
             rolls.add(new PlayerRoll(d, DieNames.of(d), faces.faceIndex(d), faces.faceValue(d), position[d]));
         }
         return new RoundResult(round, orderList, rolls, dice.grade(), dice.id());
+    }
+
+    /** The constructed sets' path: a {@link PrefixRanker} for this call over the set's shared plan. */
+    private RoundResult rollByPrefixKeys(long round, ConstructedDice dice) {
+        int n = dice.players();
+        PrefixRanker prefix = new PrefixRanker(prefixPlan(dice), false);
+        Ranker ranker = (stream, index, players, out) -> prefix.rankInto(generator, null, spec.convention(),
+                stream, index, out);
+        int[] order = new int[n];
+        RuleOrders.orderInto(spec.rule(), round, n, ranker, order, new int[n]);
+        BigInteger[] indices = new BigInteger[n];
+        BigInteger[] values = new BigInteger[n];
+        // Every rule ranks the draw whose faces it reports last, so its leading digits are kept.
+        prefix.facesInto(generator, Streams.ROUND, Streams.facesIndex(spec.rule(), round), values, indices);
+        return result(round, dice, order, indices, values);
+    }
+
+    private static RoundResult result(long round, MixedRadixDice dice, int[] order, BigInteger[] indices,
+            BigInteger[] values) {
+        int n = order.length;
+        int[] position = new int[n];
+        List<Integer> orderList = new ArrayList<>(n);
+        for (int p = 0; p < n; p++) {
+            position[order[p]] = p;
+            orderList.add(order[p]);
+        }
+        List<PlayerRoll> rolls = new ArrayList<>(n);
+        for (int d = 0; d < n; d++) {
+            rolls.add(new PlayerRoll(d, DieNames.of(d), indices[d], values[d], position[d]));
+        }
+        return new RoundResult(round, orderList, rolls, dice.grade(), dice.id());
+    }
+
+    /**
+     * Returns the prefix plan of {@code dice} under this session's algorithm, made once per
+     * player count and shared by every caller (remade if the source serves another instance).
+     */
+    PrefixPlan prefixPlan(ConstructedDice dice) {
+        Integer players = dice.players();
+        PrefixPlan plan = prefixPlans.get(players);
+        if (plan == null || !plan.isFor(dice)) {
+            plan = new PrefixPlan(dice, generator);
+            prefixPlans.put(players, plan);
+        }
+        return plan;
     }
 
     /** Returns round {@code round}'s order as player indices (through {@link FastOrders}). */

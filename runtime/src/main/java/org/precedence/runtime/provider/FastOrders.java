@@ -150,7 +150,7 @@ public final class FastOrders implements Ranker {
         }
         PrefixRanker ranker = prefix[players];
         if (ranker != null) {
-            ranker.facesInto(generator, Streams.ROUND, Streams.facesIndex(rule, round), faces);
+            ranker.facesInto(generator, Streams.ROUND, Streams.facesIndex(rule, round), faces, null);
             return;
         }
         if (sets[players] instanceof ExplicitDice) {
@@ -179,7 +179,7 @@ public final class FastOrders implements Ranker {
                     freshFour = narrow[players];
                 }
             } else if (dice instanceof ConstructedDice c) {
-                prefix[players] = new PrefixRanker(c, generator);
+                prefix[players] = new PrefixRanker(session.prefixPlan(c), true);
             }
         }
         if (dice instanceof ExplicitDice explicit) {

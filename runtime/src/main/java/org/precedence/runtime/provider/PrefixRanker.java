@@ -17,24 +17,26 @@ import org.precedence.runtime.randomness.RollGenerator;
  * LeadingGroup}, which one block draws for eight dice (for ten players: two blocks a round and
  * nothing else, unless a key ties); otherwise one block serves four dice per digit. When two keys are
  * equal (about once in 2^20 rounds / pairs) the round is ranked again by {@link LazyRanker},
- * which draws the same digits and compares to the bottom, so the order is always that of
- * {@link DiceSession#roll}.
+ * which draws the same digits and compares to the bottom, so the order is always that of the
+ * lazy comparison (tested against {@code DiceSession.rollLazily} under every algorithm).
  *
- * <p>Not thread-safe: it owns its scratch arrays (one per {@link FastOrders}).
+ * <p>The set's {@link PrefixPlan} is shared; the scratch is not. A ranker made to {@link
+ * #PrefixRanker(PrefixPlan, boolean) keep narrow blocks} (one per {@link FastOrders}) keeps the
+ * narrow blocks of every digit on stream 0, each of which serves four consecutive rounds; one
+ * made for a single {@link DiceSession#roll} keeps none.
+ *
+ * <p>Not thread-safe: it owns its scratch arrays.
  */
 final class PrefixRanker {
-    /** Prefix keys span at least 2^(2·log2(n) + this) sub-blocks: ties come about once in 2^13 rounds or less. */
-    private static final int SPARE_KEY_BITS = 12;
     private final ConstructedDice dice;
     private final int players;
     private final int prefix;
-    /** Radices of every digit as longs; 0 when a radix does not fit (faces then use BigInteger). */
+    /** The plan's radices (shared, read only). */
     private final long[] radix;
     private final boolean narrowDraws;
-    /** The dice's leading group (the same for every die of a construction); null if none is drawn. */
     private final LeadingGroup group;
-    /** Whether the prefix is exactly the leading group, so that the drawn keys rank the dice. */
     private final boolean keysOnly;
+    private final int laneGroups;
     private final long[][] digits;
     private final long[] keys;
     private final long[] block = new long[RollGenerator.LANES];
@@ -42,36 +44,32 @@ final class PrefixRanker {
     private int drawnStream = -1;
     private long drawnIndex;
     /**
-     * Narrow blocks kept per (digit, lane group): they serve four consecutive indices, so
-     * rounds asked in order draw each once per four rounds. {@code narrowC0} is c0 + 1 of
-     * the kept block (0: none).
+     * Narrow blocks kept per (digit, lane group), or null when none are kept: each serves four
+     * consecutive indices, so rounds asked in order draw it once per four rounds. Slots are
+     * allocated when first used; {@code narrowC0} is c0 + 1 of the kept block (0: none).
      */
     private final long[][] narrowWords;
     private final long[] narrowC0;
     private final int[] letters;
     private final long[] limbs;
 
-    PrefixRanker(ConstructedDice dice, RollGenerator generator) {
-        this.dice = dice;
-        this.players = dice.players();
-        int pairBits = 2 * (32 - Integer.numberOfLeadingZeros(players - 1));
-        LeadingGroup leading = generator.leadingGroups() ? LeadingGroup.of(dice, 0) : null;
-        this.group = leading == null || leading.digits() == 0 ? null : leading;
-        // The group's digits come together, so the prefix takes all of them (their product is
-        // below 2^24, so the key still fits a long).
-        this.prefix = Math.max(dice.prefixDigits(pairBits + SPARE_KEY_BITS), group == null ? 0 : group.digits());
-        this.keysOnly = group != null && prefix == group.digits();
-        this.radix = new long[dice.digits()];
-        for (int j = 0; j < radix.length; j++) {
-            BigInteger r = dice.radix(0, j);
-            radix[j] = r.bitLength() < 63 ? r.longValue() : 0;
-        }
-        this.narrowDraws = generator.narrowDraws();
+    /**
+     * A ranker over {@code plan}'s set; with {@code keepNarrowBlocks} it keeps the narrow blocks
+     * of stream 0 between calls (for callers that ask for many rounds, mostly in order).
+     */
+    PrefixRanker(PrefixPlan plan, boolean keepNarrowBlocks) {
+        this.dice = plan.dice;
+        this.players = plan.players;
+        this.prefix = plan.prefix;
+        this.radix = plan.radix;
+        this.narrowDraws = plan.narrowDraws;
+        this.group = plan.group;
+        this.keysOnly = plan.keysOnly;
+        this.laneGroups = plan.laneGroups;
         this.digits = new long[players][radix.length];
         this.keys = new long[players];
-        int groups = (players + RollGenerator.LANES - 1) / RollGenerator.LANES;
-        this.narrowWords = new long[prefix * groups][RollGenerator.LANES];
-        this.narrowC0 = new long[prefix * groups];
+        this.narrowWords = keepNarrowBlocks ? new long[radix.length * laneGroups][] : null;
+        this.narrowC0 = keepNarrowBlocks ? new long[radix.length * laneGroups] : null;
         this.letters = new int[players];
         this.limbs = new long[dice.faceLimbs()];
     }
@@ -119,10 +117,12 @@ final class PrefixRanker {
     }
 
     /**
-     * Writes the exact face values of draw (stream, index) into {@code faces}: every digit
-     * drawn as here, evaluated by {@link ConstructedDice#faceValue}.
+     * Writes the exact face values of draw (stream, index) into {@code faces} and, unless
+     * {@code indices} is null, the face indices into {@code indices}: every digit drawn as here,
+     * the values evaluated by {@link ConstructedDice#faceValue}, the indices (the mixed-radix
+     * numbers the digits spell) by {@link ConstructedDice#faceIndex}.
      */
-    void facesInto(RollGenerator generator, int stream, long index, BigInteger[] faces) {
+    void facesInto(RollGenerator generator, int stream, long index, BigInteger[] faces, BigInteger[] indices) {
         int m = radix.length;
         // The leading digits are kept from the ranking of the same draw (the usual case).
         int first = drawnStream == stream && drawnIndex == index ? prefix : 0;
@@ -137,7 +137,7 @@ final class PrefixRanker {
         }
         for (int j = first; j < m; j++) {
             if (radix[j] == 0) {
-                // A digit of 2^63 or more: the general draw (no served set has one today).
+                // A digit of 2^63 or more: the general draw below.
                 for (int d = 0; d < players; d++) {
                     digits[d][j] = -1;
                 }
@@ -148,17 +148,25 @@ final class PrefixRanker {
         if (dice.hasLongDigits()) {
             for (int d = 0; d < players; d++) {
                 faces[d] = dice.faceValue(d, digits[d], letters, limbs);
+                if (indices != null) {
+                    indices[d] = dice.faceIndex(digits[d], limbs);
+                }
             }
             return;
         }
         BigInteger[] spelled = new BigInteger[m];
         for (int d = 0; d < players; d++) {
+            BigInteger faceIndex = BigInteger.ZERO;
             for (int j = 0; j < m; j++) {
                 spelled[j] = radix[j] == 0
                         ? generator.digit(index, stream, d, j, dice.radix(d, j))
                         : BigInteger.valueOf(digits[d][j]);
+                faceIndex = faceIndex.multiply(dice.radix(d, j)).add(spelled[j]);
             }
             faces[d] = dice.faceValue(d, spelled);
+            if (indices != null) {
+                indices[d] = faceIndex;
+            }
         }
     }
 
@@ -232,21 +240,25 @@ final class PrefixRanker {
     }
 
     /**
-     * The narrow block of lane group {@code g} for digit {@code j}; blocks of the leading digits
-     * on stream 0 are kept per (digit, group) and reused while c0 = index / 4 stays the same.
+     * The narrow block of lane group {@code g} for digit {@code j}; when this ranker keeps
+     * blocks, those of stream 0 are kept per (digit, group) and reused while c0 = index / 4
+     * stays the same.
      */
     private long[] narrowBlock(RollGenerator generator, int stream, long index, int g, int j) {
         long c0 = index >>> 2;
         long c1 = RollGenerator.narrowGroupWord(stream, g);
-        if (j >= prefix || stream != Streams.ROUND) {
+        if (narrowWords == null || stream != Streams.ROUND) {
             generator.block(c0, c1, j, 0, block);
             return block;
         }
-        int kept = j * (narrowWords.length / prefix) + (g >>> 2);
+        int kept = j * laneGroups + (g >>> 2);
         long[] words = narrowWords[kept];
+        if (words == null) {
+            words = new long[RollGenerator.LANES];
+            narrowWords[kept] = words;
+        }
         if (narrowC0[kept] != c0 + 1) {
-            generator.block(c0, c1, j, 0, block);
-            System.arraycopy(block, 0, words, 0, RollGenerator.LANES);
+            generator.block(c0, c1, j, 0, words);
             narrowC0[kept] = c0 + 1;
         }
         return words;

@@ -18,6 +18,8 @@
  * players rolls the served order-fair set for n, whatever was played before (players may join
  * or leave between rounds); {@link org.precedence.runtime.provider.FastOrders} gives the same
  * orders as the sessions at simulation speed (allocation-free for explicit sets walked in
- * round order).
+ * round order). Constructed sets are ranked by their prefix keys on both paths, and their exact
+ * faces computed on long digits; the lazy digit-by-digit comparison serves every other set and
+ * is the reference both are tested against.
  */
 package org.precedence.runtime.provider;

@@ -91,6 +91,50 @@ class ConstructedDiceTest {
         assertTrue(served >= 300 * 6, "the long path served too few sets: " + served);
     }
 
+    /**
+     * The face index on longs is the mixed-radix number of the digits (positional notation with
+     * mixed radices, Knuth, TAOCP vol. 2, §4.1, from memory): reading it back digit by digit
+     * with BigInteger division must give the digits, whatever their size, extremes included.
+     */
+    @Test
+    void faceIndexOnLongs_isTheMixedRadixNumberOfTheDigits() {
+        SplittableRandom random = new SplittableRandom(4012L); // fixed seed: inputs only
+        for (int n : new int[] {2, 3, 5, 7, 8, 10, 12, 13, 19}) {
+            ConstructedDice dice = new ConstructedDice(Construction.smallest(n));
+            assertTrue(dice.hasLongDigits(), "n=" + n);
+            long[] limbs = new long[dice.faceLimbs()];
+            for (int trial = 0; trial < 200; trial++) {
+                BigInteger[] digits = randomDigits(dice, random);
+                if (trial < 2) {
+                    for (int j = 0; j < digits.length; j++) {
+                        digits[j] = trial == 0 ? BigInteger.ZERO : dice.radix(0, j).subtract(BigInteger.ONE);
+                    }
+                }
+                BigInteger index = dice.faceIndex(longs(digits), limbs);
+                BigInteger[] read = new BigInteger[digits.length];
+                BigInteger rest = index;
+                for (int j = digits.length - 1; j >= 0; j--) {
+                    BigInteger[] qr = rest.divideAndRemainder(dice.radix(0, j));
+                    read[j] = qr[1];
+                    rest = qr[0];
+                }
+                assertEquals(BigInteger.ZERO, rest, "n=" + n + " trial " + trial);
+                assertEquals(java.util.Arrays.asList(digits), java.util.Arrays.asList(read), "n=" + n + " trial " + trial);
+                if (trial == 1) {
+                    assertEquals(dice.sides(0).subtract(BigInteger.ONE), index, "n=" + n);
+                }
+            }
+        }
+        ConstructedDice ten = new ConstructedDice(Construction.smallest(10));
+        long[] bad = new long[ten.digits()];
+        bad[1] = ten.radix(0, 1).longValueExact();
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> ten.faceIndex(bad, new long[ten.faceLimbs()]));
+        assertEquals("digit 1 must be in 0.." + (bad[1] - 1) + ", got " + bad[1], e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> ten.faceIndex(new long[3], new long[ten.faceLimbs()]));
+        assertEquals("a face has " + ten.digits() + " digits, got 3", e.getMessage());
+    }
+
     private static long[] longs(BigInteger[] digits) {
         long[] out = new long[digits.length];
         for (int j = 0; j < digits.length; j++) {
