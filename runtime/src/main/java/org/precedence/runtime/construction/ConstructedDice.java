@@ -286,6 +286,18 @@ public final class ConstructedDice implements MixedRadixDice {
         return key;
     }
 
+    /**
+     * Returns whether an odd number of the blocks that the first {@code k} digits select are
+     * reversed, i.e. whether digit k is read backwards ({@code d ↦ radix − 1 − d}) in value order.
+     */
+    public boolean readsBackwardsAfter(long[] digits, int k) {
+        long negative = 0;
+        for (int j = 0; j < k; j++) {
+            negative = flipAfter(j, digits[j], negative);
+        }
+        return negative != 0;
+    }
+
     /** The reversal mask below digit j's block d: {@code negative} flipped if that block is reversed. */
     private long flipAfter(int j, long d, long negative) {
         if (nonZeroReversed[j]) {

@@ -26,6 +26,21 @@ final class PrefixPlan {
     final LeadingGroup group;
     /** Whether the prefix is exactly the leading group, so that the drawn keys rank the dice. */
     final boolean keysOnly;
+    /**
+     * When the prefix digits alone give fewer key bits than wanted (from 20 players on, where
+     * the next digit, n!, no longer fits beside them in a long): how many low key bits hold the
+     * top bits of digit {@code prefix}; 0 when the key is the prefix key alone.
+     */
+    final int extraBits;
+    /** The right shift that leaves the top {@link #extraBits} of digit {@code prefix}. */
+    final int extraShift;
+    /**
+     * For an extra digit of radix 2^63 or more (drawn by masked rejection): its bit length
+     * bitLength(R − 1), the words per attempt, and R as big-endian words; 0, 0, null otherwise.
+     */
+    final int bigBits;
+    final int bigWords;
+    final long[] bigRadix;
     /** Lane groups of {@link RollGenerator#LANES} dice. */
     final int laneGroups;
 
@@ -38,12 +53,38 @@ final class PrefixPlan {
         // The group's digits come together, so the prefix takes all of them (their product is
         // below 2^24, so the key still fits a long).
         this.prefix = Math.max(dice.prefixDigits(pairBits + SPARE_KEY_BITS), group == null ? 0 : group.digits());
-        this.keysOnly = group != null && prefix == group.digits();
         this.radix = new long[dice.digits()];
         for (int j = 0; j < radix.length; j++) {
             BigInteger r = dice.radix(0, j);
             radix[j] = r.bitLength() < 63 ? r.longValue() : 0;
         }
+        BigInteger product = BigInteger.ONE;
+        for (int j = 0; j < prefix; j++) {
+            product = product.multiply(dice.radix(0, j));
+        }
+        int keyBits = product.subtract(BigInteger.ONE).bitLength();
+        if (keyBits < pairBits + SPARE_KEY_BITS && prefix < radix.length) {
+            // Keys below 2^62 keep differences exact: the prefix key (below 2^keyBits) shifted
+            // left, then the top bits of the next digit.
+            BigInteger next = dice.radix(0, prefix);
+            int nextBits = next.subtract(BigInteger.ONE).bitLength();
+            this.extraBits = 62 - keyBits;
+            this.extraShift = Math.max(0, nextBits - extraBits);
+            boolean big = radix[prefix] == 0;
+            this.bigBits = big ? nextBits : 0;
+            this.bigWords = big ? (nextBits + 63) / 64 : 0;
+            this.bigRadix = big ? new long[bigWords] : null;
+            for (int i = 0; i < bigWords; i++) {
+                bigRadix[i] = next.shiftRight(64 * (bigWords - 1 - i)).longValue();
+            }
+        } else {
+            this.extraBits = 0;
+            this.extraShift = 0;
+            this.bigBits = 0;
+            this.bigWords = 0;
+            this.bigRadix = null;
+        }
+        this.keysOnly = group != null && prefix == group.digits() && extraBits == 0;
         this.narrowDraws = generator.narrowDraws();
         this.laneGroups = (players + RollGenerator.LANES - 1) / RollGenerator.LANES;
     }

@@ -36,9 +36,14 @@ final class PrefixRanker {
     private final boolean narrowDraws;
     private final LeadingGroup group;
     private final boolean keysOnly;
+    private final PrefixPlan plan;
     private final int laneGroups;
     private final long[][] digits;
     private final long[] keys;
+    /** Scratch for the extended keys: the top bits of digit {@code prefix} per die, and its words. */
+    private final long[] tops;
+    private final long[][] bigBlocks;
+    private final long[] bigWords;
     private final long[] block = new long[RollGenerator.LANES];
     /** The draw whose leading digits {@code digits[·][0..prefix)} hold (stream −1: none yet). */
     private int drawnStream = -1;
@@ -65,6 +70,10 @@ final class PrefixRanker {
         this.narrowDraws = plan.narrowDraws;
         this.group = plan.group;
         this.keysOnly = plan.keysOnly;
+        this.plan = plan;
+        this.tops = plan.extraBits > 0 ? new long[players] : null;
+        this.bigBlocks = new long[plan.bigWords][RollGenerator.LANES];
+        this.bigWords = new long[plan.bigWords];
         this.laneGroups = plan.laneGroups;
         this.digits = new long[players][radix.length];
         this.keys = new long[players];
@@ -93,6 +102,9 @@ final class PrefixRanker {
             }
             for (int d = 0; d < n; d++) {
                 k[d] = dice.prefixKey(digits[d], prefix);
+            }
+            if (tops != null) {
+                extendKeys(generator, stream, index);
             }
         }
         drawnStream = stream;
@@ -168,6 +180,85 @@ final class PrefixRanker {
                 indices[d] = faceIndex;
             }
         }
+    }
+
+    /**
+     * Appends to every key the top {@code extraBits} of digit {@code prefix}, read backwards
+     * ({@code t ↦ 2^extraBits − 1 − t}) where the enclosing block is reversed: monotone in that
+     * digit's value order, so different keys still order dice exactly as their faces, and equal
+     * ones fall back to the full comparison.
+     */
+    private void extendKeys(RollGenerator generator, int stream, long index) {
+        int n = players;
+        if (plan.bigWords > 0) {
+            drawBigTops(generator, stream, index);
+        } else {
+            drawDigit(generator, stream, index, prefix);
+            for (int d = 0; d < n; d++) {
+                tops[d] = digits[d][prefix] >>> plan.extraShift;
+            }
+        }
+        int bits = plan.extraBits;
+        long all = (1L << bits) - 1;
+        for (int d = 0; d < n; d++) {
+            long t = dice.readsBackwardsAfter(digits[d], prefix) ? all - tops[d] : tops[d];
+            keys[d] = (keys[d] << bits) | t;
+        }
+    }
+
+    /**
+     * The top bits of a digit of radix 2^63 or more, drawn for every die by the masked rule of
+     * {@link BoundedSampler#draw} (attempt a reads words a·w … a·w+w−1, big-endian, low L bits,
+     * accepted below R): attempt 0 takes w blocks per lane group, rejected dice retry alone.
+     */
+    private void drawBigTops(RollGenerator generator, int stream, long index) {
+        int w = plan.bigWords;
+        int j = prefix;
+        for (int g = 0; g < players; g += RollGenerator.LANES) {
+            for (int i = 0; i < w; i++) {
+                generator.block(index, RollGenerator.groupWord(stream, g), j, i, bigBlocks[i]);
+            }
+            int end = Math.min(players, g + RollGenerator.LANES);
+            for (int d = g; d < end; d++) {
+                for (int i = 0; i < w; i++) {
+                    bigWords[i] = bigBlocks[i][d & 3];
+                }
+                long top = acceptedTop();
+                for (long attempt = 1; top < 0; attempt++) {
+                    for (int i = 0; i < w; i++) {
+                        bigWords[i] = generator.word(index, stream, d, j, attempt * w + i);
+                    }
+                    top = acceptedTop();
+                }
+                tops[d] = top;
+            }
+        }
+    }
+
+    /** The masked number in {@code bigWords}: its top bits if it is below the radix, else −1. */
+    private long acceptedTop() {
+        int w = plan.bigWords;
+        long[] x = bigWords;
+        int firstBits = plan.bigBits - 64 * (w - 1);
+        if (firstBits < 64) {
+            x[0] &= (1L << firstBits) - 1;
+        }
+        long[] r = plan.bigRadix;
+        int i = 0;
+        while (i < w && x[i] == r[i]) {
+            i++;
+        }
+        if (i == w || Long.compareUnsigned(x[i], r[i]) > 0) {
+            return -1;
+        }
+        int shift = plan.extraShift;
+        int word = w - 1 - (shift >>> 6);
+        int offset = shift & 63;
+        long v = x[word] >>> offset;
+        if (offset != 0 && word > 0) {
+            v |= x[word - 1] << (64 - offset);
+        }
+        return v & ((1L << plan.extraBits) - 1);
     }
 
     /**

@@ -167,8 +167,9 @@ class DiceSessionTest {
     }
 
     /**
-     * The standard sets for 7, 8, 10, 12 and 64 players are constructed (under v3 the prefix is
-     * the leading group for 10, and reaches past it for the others): the prefix ranking of
+     * The standard sets for 7 players on are constructed (under v3 the prefix is the leading
+     * group for 10, and reaches past it for the others; from 20 on the key also takes the top
+     * bits of the S_n digit, a BigInteger from 21 on): the prefix ranking of
      * FastOrders, with the narrow blocks it keeps between rounds, and its exact faces must be
      * those of the general path (the lazy comparison behind DiceSession.rollLazily) under every
      * rule, both conventions and every algorithm id.
@@ -183,11 +184,11 @@ class DiceSessionTest {
                     DiceSession s = DiceSession.open(new SessionSpec(SEED, mode, rule, convention),
                             FairDiceProvider.standardSets(), algorithm);
                     FastOrders fast = s.fastOrders();
-                    for (int n : new int[] {7, 8, 10, 12, 64}) {
+                    for (int n : new int[] {7, 8, 10, 12, 20, 21, 33, 64}) {
                         assertTrue(s.setFor(n) instanceof ConstructedDice, "n=" + n);
                         int[] out = new int[n];
                         BigInteger[] faces = new BigInteger[n];
-                        int rounds = n == 64 ? 3 : 12;
+                        int rounds = n >= 20 ? 3 : 12;
                         for (int i = 0; i < rounds; i++) {
                             long k = i % 2 == 0 ? i : random.nextLong(Long.MAX_VALUE);
                             RoundResult r = s.rollLazily(k, n);
