@@ -22,15 +22,16 @@ import org.precedence.runtime.randomness.SeededFaces;
  * attempt-0 words of four players for one round. Each face is taken by Lemire's method, and
  * the players are ranked by counting lower faces (branch-free; insertion sort above 16
  * players); a rejected chunk or word falls back to the general draw of the next attempts.
- * Constructed sets are ranked by {@link PrefixRanker}: a few leading digits per die, drawn a
- * lane group at a time, decide the order unless two dice tie on them.
+ * Constructed sets are ranked by {@link PrefixRanker}: a key per die from its leading digits
+ * (under the current fast algorithm, the leading key itself, eight dice per block) decides the
+ * order unless two dice tie on it.
  *
  * <p>Allocation: none for explicit sets in fast mode when rounds are asked in increasing order
  * (the usual simulation loop: the Philox generator of each lane is stepped); a jump to another
  * block builds one library generator (48 bytes); secure mode allocates the JDK's 32-byte MAC
- * result per block; constructed sets allocate what their blocks' library generators need (about
- * 180 bytes per 10-player round, JMH {@code -prof gc}), the lazy comparison's memo when two dice
- * tie on their leading digits, and one BigInteger per exact face.
+ * result per block; constructed sets allocate what their blocks' library generators need (two
+ * blocks per 10-player round under the current fast algorithm), the lazy comparison's memo when
+ * two dice tie on their keys, and one BigInteger per exact face.
  *
  * <p>Not thread-safe: it owns scratch arrays. Create one per thread ({@link
  * DiceSession#fastOrders()} is cheap).
