@@ -153,17 +153,13 @@ public final class DiceSession implements TurnOrderSource {
         int[] order = new int[n];
         RuleOrders.orderInto(spec.rule(), round, n, ranker, order, new int[n]);
         SeededFaces faces = shown[0];
-        int[] position = new int[n];
-        List<Integer> orderList = new ArrayList<>(n);
-        for (int p = 0; p < n; p++) {
-            position[order[p]] = p;
-            orderList.add(order[p]);
-        }
-        List<PlayerRoll> rolls = new ArrayList<>(n);
+        BigInteger[] indices = new BigInteger[n];
+        BigInteger[] values = new BigInteger[n];
         for (int d = 0; d < n; d++) {
-            rolls.add(new PlayerRoll(d, DieNames.of(d), faces.faceIndex(d), faces.faceValue(d), position[d]));
+            indices[d] = faces.faceIndex(d);
+            values[d] = faces.faceValue(d);
         }
-        return new RoundResult(round, orderList, rolls, dice.grade(), dice.id());
+        return result(round, dice, order, indices, values);
     }
 
     /** The constructed sets' path: a {@link PrefixRanker} for this call over the set's shared plan. */
