@@ -116,20 +116,7 @@ public final class GoldenVectors {
         o.addProperty("algorithm", algorithmId);
         o.addProperty("seed", seed.toHex());
         o.addProperty("set", setId);
-        o.addProperty("rule", rule.name());
-        o.addProperty("convention", convention.name());
-        o.addProperty("round", round);
-        JsonArray faceIndices = new JsonArray();
-        JsonArray faces = new JsonArray();
-        for (PlayerRoll p : r.rolls()) {
-            faceIndices.add(p.faceIndex().toString());
-            faces.add(p.faceValue().toString());
-        }
-        o.add("faceIndices", faceIndices);
-        o.add("faces", faces);
-        JsonArray order = new JsonArray();
-        r.order().forEach(order::add);
-        o.add("order", order);
+        addOutcome(o, rule, convention, round, r, true);
         return o;
     }
 
@@ -147,18 +134,29 @@ public final class GoldenVectors {
         o.addProperty("players", players);
         o.addProperty("set", dice.id());
         o.addProperty("setSha256", dice.sha256());
+        addOutcome(o, rule, convention, round, r, false);
+        return o;
+    }
+
+    /** Adds rule, convention, round, (face indices,) faces and order, in the files' key order. */
+    private static void addOutcome(JsonObject o, OrderRule rule, RankingConvention convention, long round,
+            RoundResult r, boolean withIndices) {
         o.addProperty("rule", rule.name());
         o.addProperty("convention", convention.name());
         o.addProperty("round", round);
+        JsonArray faceIndices = new JsonArray();
         JsonArray faces = new JsonArray();
         for (PlayerRoll p : r.rolls()) {
+            faceIndices.add(p.faceIndex().toString());
             faces.add(p.faceValue().toString());
+        }
+        if (withIndices) {
+            o.add("faceIndices", faceIndices);
         }
         o.add("faces", faces);
         JsonArray order = new JsonArray();
         r.order().forEach(order::add);
         o.add("order", order);
-        return o;
     }
 
     static JsonObject generate(Generation gen) {
