@@ -15,10 +15,13 @@ import org.precedence.runtime.randomness.RollGenerator;
  * ConstructedDice#prefixKey prefix key}; distinct keys decide the order. Under an algorithm with
  * {@link RollGenerator#leadingGroups() leading groups} the prefix covers at least the {@link
  * LeadingGroup}, which one block draws for eight dice (for ten players: two blocks a round and
- * nothing else, unless a key ties); otherwise one block serves four dice per digit. When two keys are
- * equal (about once in 2^20 rounds / pairs) the round is ranked again by {@link LazyRanker},
- * which draws the same digits and compares to the bottom, so the order is always that of the
- * lazy comparison (tested against {@code DiceSession.rollLazily} under every algorithm).
+ * nothing else, unless a key ties); otherwise one block serves four dice per digit. From 20
+ * players on the key also holds the top bits of the digit after the prefix ({@link
+ * PrefixPlan#extraBits}). When two keys are equal (for 10 players about once in 330,000
+ * rounds; for 64, with 62-bit keys, practically never) the round is ranked again by {@link
+ * LazyRanker}, which draws the same digits and compares to the bottom, so the order is always
+ * that of the lazy comparison (tested against {@code DiceSession.rollLazily} under every
+ * algorithm).
  *
  * <p>The set's {@link PrefixPlan} is shared; the scratch is not. A ranker made to {@link
  * #PrefixRanker(PrefixPlan, boolean) keep narrow blocks} (one per {@link FastOrders}) keeps the

@@ -9,9 +9,9 @@ import org.precedence.runtime.dice.MixedRadixDice;
  * first time it is asked for, exactly as {@link RollGenerator#digit} draws it (16-bit chunks
  * or 64-bit words, by the algorithm and the radix), and remembered; under an algorithm with
  * {@link RollGenerator#leadingGroups() leading groups}, a digit of the die's {@link
- * LeadingGroup} is drawn with the rest of the group by {@link RollGenerator#groupValue}. Because every digit is
- * a pure function of its coordinates, the faces do not depend on which digits are asked for
- * first, or whether they are asked for at all.
+ * LeadingGroup} is drawn with the rest of the group by {@link RollGenerator#groupValue}.
+ * Because every digit is a pure function of its coordinates, the faces do not depend on which
+ * digits are asked for first, or whether they are asked for at all.
  *
  * <p>Not thread-safe (it memoises); create one per draw.
  */
