@@ -195,12 +195,7 @@ public final class GoldenVectors {
                 for (BigInteger radix : gen.radices()) {
                     for (int player = 0; player < 6; player += 5) {
                         final int p = player;
-                        JsonObject d = new JsonObject();
-                        d.addProperty("algorithm", g.algorithmId());
-                        d.addProperty("seed", seed.toHex());
-                        d.addProperty("index", 9);
-                        d.addProperty("stream", 1);
-                        d.addProperty("player", p);
+                        JsonObject d = drawAt(g, seed, p);
                         d.addProperty("digit", 2);
                         d.addProperty("radix", radix.toString());
                         d.addProperty("value", g.digit(9, 1, p, 2, radix).toString());
@@ -228,40 +223,51 @@ public final class GoldenVectors {
         root.add("digits", digits);
         root.add("rolls", rolls);
         if (gen.leadingGroups()) {
-            JsonArray groupValues = new JsonArray();
-            JsonArray constructed = new JsonArray();
-            for (SessionSeed seed : SEEDS) {
-                RollGenerator g = RollGenerator.of(gen.fastId(), seed);
-                for (long product : GROUP_PRODUCTS) {
-                    for (int player : new int[] {0, 5, 9}) {
-                        JsonObject v = new JsonObject();
-                        v.addProperty("algorithm", g.algorithmId());
-                        v.addProperty("seed", seed.toHex());
-                        v.addProperty("index", 9);
-                        v.addProperty("stream", 1);
-                        v.addProperty("player", player);
-                        v.addProperty("product", product);
-                        v.addProperty("value", g.groupValue(9, 1, player, product));
-                        groupValues.add(v);
-                    }
+            addLeadingGroups(gen, root);
+        }
+        return root;
+    }
+
+    /** v3's sections: leading keys for each product, and whole rounds of constructed sets. */
+    private static void addLeadingGroups(Generation gen, JsonObject root) {
+        JsonArray groupValues = new JsonArray();
+        JsonArray constructed = new JsonArray();
+        for (SessionSeed seed : SEEDS) {
+            RollGenerator g = RollGenerator.of(gen.fastId(), seed);
+            for (long product : GROUP_PRODUCTS) {
+                for (int player : new int[] {0, 5, 9}) {
+                    JsonObject v = drawAt(g, seed, player);
+                    v.addProperty("product", product);
+                    v.addProperty("value", g.groupValue(9, 1, player, product));
+                    groupValues.add(v);
                 }
-                for (int players : CONSTRUCTED_PLAYERS) {
-                    for (OrderRule rule : OrderRule.values()) {
-                        for (RankingConvention convention : RankingConvention.values()) {
-                            if (rule != OrderRule.FRESH_EACH_ROUND && convention == RankingConvention.HIGHEST_FIRST) {
-                                continue;
-                            }
-                            for (long round : CONSTRUCTED_ROUNDS) {
-                                constructed.add(constructedRoll(gen.fastId(), seed, players, rule, convention, round));
-                            }
+            }
+            for (int players : CONSTRUCTED_PLAYERS) {
+                for (OrderRule rule : OrderRule.values()) {
+                    for (RankingConvention convention : RankingConvention.values()) {
+                        if (rule != OrderRule.FRESH_EACH_ROUND && convention == RankingConvention.HIGHEST_FIRST) {
+                            continue;
+                        }
+                        for (long round : CONSTRUCTED_ROUNDS) {
+                            constructed.add(constructedRoll(gen.fastId(), seed, players, rule, convention, round));
                         }
                     }
                 }
             }
-            root.add("groupValues", groupValues);
-            root.add("constructedRolls", constructed);
         }
-        return root;
+        root.add("groupValues", groupValues);
+        root.add("constructedRolls", constructed);
+    }
+
+    /** The coordinates every sampled draw in the files is taken at: index 9, stream 1. */
+    private static JsonObject drawAt(RollGenerator g, SessionSeed seed, int player) {
+        JsonObject o = new JsonObject();
+        o.addProperty("algorithm", g.algorithmId());
+        o.addProperty("seed", seed.toHex());
+        o.addProperty("index", 9);
+        o.addProperty("stream", 1);
+        o.addProperty("player", player);
+        return o;
     }
 
     static JsonArray hexWords(long[] words) {

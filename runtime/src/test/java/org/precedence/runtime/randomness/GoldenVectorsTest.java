@@ -162,12 +162,14 @@ class GoldenVectorsTest {
         assertTrue(fast > 250, "fast rounds compared: " + fast);
     }
 
-    @Test
-    void v1Generator_reproducesTheCommittedV1FileByteForByte() throws IOException {
-        // The v1 promise: the retained v1 implementation still computes exactly the v1 file.
-        try (InputStream in = GoldenVectorsTest.class.getResourceAsStream(GoldenVectors.RESOURCE)) {
-            assertTrue(in != null, "v1 golden vectors are on the test class path");
-            assertEquals(new String(in.readAllBytes(), StandardCharsets.UTF_8), GoldenVectors.text(GoldenVectors.V1));
+    @ParameterizedTest
+    @MethodSource("generations")
+    void generator_reproducesTheCommittedFileByteForByte(GoldenVectors.Generation gen) throws IOException {
+        // The promise of every generation: the retained implementation of its algorithm ids
+        // still computes exactly its committed file.
+        try (InputStream in = GoldenVectorsTest.class.getResourceAsStream(gen.resource())) {
+            assertTrue(in != null, gen.resource() + " is on the test class path");
+            assertEquals(new String(in.readAllBytes(), StandardCharsets.UTF_8), GoldenVectors.text(gen));
         }
     }
 }
