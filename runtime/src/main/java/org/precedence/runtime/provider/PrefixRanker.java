@@ -46,7 +46,7 @@ final class PrefixRanker {
     /** Scratch for the extended keys: the top bits of digit {@code prefix} per die, and its words. */
     private final long[] tops;
     private final long[][] bigBlocks;
-    private final long[] bigWords;
+    private final long[] bigDigitWords;
     private final long[] block = new long[RollGenerator.LANES];
     /** The draw whose leading digits {@code digits[·][0..prefix)} hold (stream −1: none yet). */
     private int drawnStream = -1;
@@ -76,7 +76,7 @@ final class PrefixRanker {
         this.plan = plan;
         this.tops = plan.extraBits > 0 ? new long[players] : null;
         this.bigBlocks = new long[plan.bigWords][RollGenerator.LANES];
-        this.bigWords = new long[plan.bigWords];
+        this.bigDigitWords = new long[plan.bigWords];
         this.laneGroups = plan.laneGroups;
         this.digits = new long[players][radix.length];
         this.keys = new long[players];
@@ -224,12 +224,12 @@ final class PrefixRanker {
             int end = Math.min(players, g + RollGenerator.LANES);
             for (int d = g; d < end; d++) {
                 for (int i = 0; i < w; i++) {
-                    bigWords[i] = bigBlocks[i][d & 3];
+                    bigDigitWords[i] = bigBlocks[i][d & 3];
                 }
                 long top = acceptedTop();
                 for (long attempt = 1; top < 0; attempt++) {
                     for (int i = 0; i < w; i++) {
-                        bigWords[i] = generator.word(index, stream, d, j, attempt * w + i);
+                        bigDigitWords[i] = generator.word(index, stream, d, j, attempt * w + i);
                     }
                     top = acceptedTop();
                 }
@@ -238,10 +238,10 @@ final class PrefixRanker {
         }
     }
 
-    /** The masked number in {@code bigWords}: its top bits if it is below the radix, else −1. */
+    /** The masked number in {@code bigDigitWords}: its top bits if it is below the radix, else −1. */
     private long acceptedTop() {
         int w = plan.bigWords;
-        long[] x = bigWords;
+        long[] x = bigDigitWords;
         int firstBits = plan.bigBits - 64 * (w - 1);
         if (firstBits < 64) {
             x[0] &= (1L << firstBits) - 1;
